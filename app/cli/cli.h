@@ -1,0 +1,40 @@
+#pragma once
+// The command-line front end. Exit codes: 0 ok, 1 bad input (files, values, substances),
+// 2 usage error (unknown or conflicting options).
+#include <iosfwd>
+#include <string>
+#include <vector>
+
+namespace CLI {
+class App;
+}
+
+namespace pw::cli {
+
+inline constexpr int kExitOk = 0;
+inline constexpr int kExitBadInput = 1;
+inline constexpr int kExitUsage = 2;
+
+// Streams the commands write to; tests substitute string streams.
+struct Io {
+    std::ostream &out;
+    std::ostream &err;
+    std::istream &in;
+};
+
+int run(int argc, char **argv);
+int run(const std::vector<std::string> &args, Io io);
+
+// Each command adds its subcommand and the callback that performs it. The callback reports
+// failures by throwing (pw::Error -> exit 1) after writing nothing to its output file.
+void addListCommand(CLI::App &app, Io &io);
+void addInfoCommand(CLI::App &app, Io &io);
+void addValidateCommand(CLI::App &app, Io &io);
+void addClassifyCommand(CLI::App &app, Io &io);
+void addBoundaryCommand(CLI::App &app, Io &io);
+void addPathCommand(CLI::App &app, Io &io);
+void addFitCommand(CLI::App &app, Io &io);
+void addCompareCommand(CLI::App &app, Io &io);
+void addPlotCommand(CLI::App &app, Io &io);
+
+}  // namespace pw::cli

@@ -1,0 +1,48 @@
+#pragma once
+// Which phase a state point (T, p) is in, and how far it is from the boundary that bounds
+// its region. Conventions (docs/classification.md):
+//   vapor          fluid below the vaporization or sublimation curve, T < Tc
+//   gas            T >= Tc and p < pc
+//   supercritical  T >= Tc and p >= pc (and not solid)
+//   liquid         between melting and vaporization curves; includes p > pc with T < Tc
+//   solid          below the melting or sublimation temperature at that pressure
+// Margins: dT_K = T - T_boundary(p), dP_Pa = p - p_boundary(T) for the nearest boundary of
+// the point's region (NaN where that boundary does not exist at that T or p). For gas and
+// supercritical points the reference is the critical point (dT = T - Tc, dP = p - pc).
+#include <string>
+#include <string_view>
+
+#include "core/phase_diagram.h"
+
+namespace pw {
+
+enum class Phase { Solid, Liquid, Vapor, Gas, Supercritical, Unknown };
+std::string_view toString(Phase phase);  // "solid", "liquid", "vapor", "gas", "supercritical", "unknown"
+
+struct ClassifyOptions {
+    // A point is on_boundary when |dT_K| <= onBoundary_K or |dP_Pa| <= onBoundaryRel * p_boundary.
+    double onBoundary_K = 0.01;
+    double onBoundaryRel = 1e-4;
+};
+
+struct Classification {
+    Phase phase = Phase::Unknown;
+    std::string solidForm;  // solid points: "ice III", "solid", or "unknown"
+    const Boundary *nearest = nullptr;  // null for the critical-point reference or no data
+    std::string nearestLabel;           // "sublimation", "melting (ice Ih)", "critical point"
+    double dT_K = kNaN;
+    double dP_Pa = kNaN;
+    bool onBoundary = false;
+    bool withinUncertainty = false;  // |dP| within the boundary's stated uncertainty
+    bool extrapolated = false;       // a boundary was evaluated outside its validity range
+    std::string reason;              // why Unknown (e.g. "no melting data above 1 GPa")
+};
+
+// Throws DomainError for T <= 0, p <= 0 or non-finite input.
+Classification classify(const PhaseDiagram &diagram, double T_K, double P_Pa,
+                        const ClassifyOptions &options = {});
+
+// Space-separated flags for tables: "on_boundary", "within_uncertainty", "extrapolated".
+std::string flagsText(const Classification &c);
+
+}  // namespace pw

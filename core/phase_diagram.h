@@ -1,0 +1,77 @@
+#pragma once
+// The pressure–temperature phase diagram of one substance, built from its Substance data.
+// Knows which boundary applies where (the triple points split the curves into segments),
+// answers boundary queries, derived quantities, and checks thermodynamic consistency.
+#include <optional>
+#include <string>
+#include <vector>
+
+#include "core/substance.h"
+
+namespace pw {
+
+struct BoundaryValue {
+    const Boundary *boundary = nullptr;
+    double value = kNaN;  // Pa for pressuresAt, K for temperaturesAt
+    bool extrapolated = false;
+};
+
+enum class Severity { Info, Warning, Error };
+struct Finding {
+    Severity severity = Severity::Info;
+    std::string check;    // short id: "triple-point-mismatch", "not-monotonic", ...
+    std::string message;  // full sentence with the numbers
+};
+
+class PhaseDiagram {
+public:
+    // Throws pw::Error when the data cannot form a diagram (no boundary at all...).
+    explicit PhaseDiagram(Substance substance);
+
+    const Substance &substance() const { return substance_; }
+    const FixedPoint *triplePoint() const;  // solid–liquid–vapor, null if unknown
+    const FixedPoint *criticalPoint() const;
+    const Boundary *vaporization() const;
+    const Boundary *sublimation() const;
+    // Melting curves ordered by increasing pressure (water: Ih, III, V, VI, VII).
+    const std::vector<const Boundary *> &melting() const { return melting_; }
+
+    // Every boundary's pressure at T where its segment exists at T.
+    std::vector<BoundaryValue> pressuresAt(double T_K) const;
+    // Every boundary's temperature at P where its segment exists at P.
+    std::vector<BoundaryValue> temperaturesAt(double P_Pa) const;
+
+    // Piecewise over the segments; nullopt where no segment covers the argument.
+    std::optional<BoundaryValue> meltingTemperature(double P_Pa) const;
+    std::optional<BoundaryValue> vaporizationTemperature(double P_Pa) const;   // pt <= P <= pc
+    std::optional<BoundaryValue> sublimationTemperature(double P_Pa) const;    // P <= pt
+    std::optional<BoundaryValue> meltingPressure(double T_K) const;
+    std::optional<BoundaryValue> vaporizationPressure(double T_K) const;       // Tt <= T <= Tc
+    std::optional<BoundaryValue> sublimationPressure(double T_K) const;        // T <= Tt
+
+    // At 101 325 Pa; nullopt when the isobar does not meet that boundary.
+    std::optional<double> normalMeltingPoint() const;
+    std::optional<double> normalBoilingPoint() const;
+    std::optional<double> normalSublimationPoint() const;
+
+    // Sign of dp/dT of the melting curve at the main triple point (+1, -1; nullopt: no data)
+    // and the Clapeyron verdict: a positive slope means the solid is denser than the liquid.
+    std::optional<int> meltSlopeSign() const;
+    std::optional<bool> solidDenserThanLiquid() const;
+
+    // Enthalpies at the main triple point implied by the curves (J/mol): Clausius–Clapeyron
+    // (ideal vapor, negligible condensed volume) for vaporization and sublimation; Clapeyron
+    // with the file's ΔV for fusion (nullopt without ΔV).
+    std::optional<double> dHvapTriple() const;
+    std::optional<double> dHsubTriple() const;
+    std::optional<double> dHfusTriple() const;
+
+    // Thermodynamic consistency checks (returned, never thrown).
+    std::vector<Finding> consistency() const;
+
+private:
+    Substance substance_;
+    std::vector<const Boundary *> melting_;
+};
+
+}  // namespace pw
