@@ -17,7 +17,8 @@
 namespace pw {
 
 enum class Phase { Solid, Liquid, Vapor, Gas, Supercritical, Unknown };
-std::string_view toString(Phase phase);  // "solid", "liquid", "vapor", "gas", "supercritical", "unknown"
+std::string_view toString(
+    Phase phase);  // "solid", "liquid", "vapor", "gas", "supercritical", "unknown"
 
 struct ClassifyOptions {
     // A point is on_boundary when |dT_K| <= onBoundary_K or |dP_Pa| <= onBoundaryRel * p_boundary.
@@ -27,7 +28,7 @@ struct ClassifyOptions {
 
 struct Classification {
     Phase phase = Phase::Unknown;
-    std::string solidForm;  // solid points: "ice III", "solid", or "unknown"
+    std::string solidForm;              // solid points: "ice III", "solid", or "unknown"
     const Boundary *nearest = nullptr;  // null for the critical-point reference or no data
     std::string nearestLabel;           // "sublimation", "melting (ice Ih)", "critical point"
     double dT_K = kNaN;

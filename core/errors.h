@@ -29,7 +29,9 @@ public:
 class InputError : public Error {
 public:
     InputError(std::string file, long row, std::string field, const std::string &what)
-        : Error(format(file, row, field, what)), file_(std::move(file)), row_(row),
+        : Error(format(file, row, field, what)),
+          file_(std::move(file)),
+          row_(row),
           field_(std::move(field)) {}
     const std::string &file() const { return file_; }
     long row() const { return row_; }

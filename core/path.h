@@ -17,8 +17,15 @@ struct State {
 };
 
 enum class Transition {
-    Melting, Freezing, Vaporization, Condensation, Sublimation, Deposition,
-    EnterSupercritical, LeaveSupercritical, SolidSolid
+    Melting,
+    Freezing,
+    Vaporization,
+    Condensation,
+    Sublimation,
+    Deposition,
+    EnterSupercritical,
+    LeaveSupercritical,
+    SolidSolid
 };
 std::string_view toString(Transition t);  // "melting", ..., "enter_supercritical"
 
@@ -30,13 +37,13 @@ struct PathEvent {
     Transition transition = Transition::Melting;
     Phase from = Phase::Unknown;
     Phase to = Phase::Unknown;
-    std::string detail;     // e.g. "ice Ih -> liquid"
+    std::string detail;  // e.g. "ice Ih -> liquid"
 };
 
 struct MarginRecord {
-    double minAbsDT_K = kNaN;   // smallest |dT| seen with that boundary nearest
+    double minAbsDT_K = kNaN;  // smallest |dT| seen with that boundary nearest
     double minAbsDP_Pa = kNaN;
-    std::size_t index = 0;      // where the smallest |dT| occurred
+    std::size_t index = 0;  // where the smallest |dT| occurred
 };
 
 struct PathSummary {

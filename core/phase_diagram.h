@@ -43,11 +43,11 @@ public:
 
     // Piecewise over the segments; nullopt where no segment covers the argument.
     std::optional<BoundaryValue> meltingTemperature(double P_Pa) const;
-    std::optional<BoundaryValue> vaporizationTemperature(double P_Pa) const;   // pt <= P <= pc
-    std::optional<BoundaryValue> sublimationTemperature(double P_Pa) const;    // P <= pt
+    std::optional<BoundaryValue> vaporizationTemperature(double P_Pa) const;  // pt <= P <= pc
+    std::optional<BoundaryValue> sublimationTemperature(double P_Pa) const;   // P <= pt
     std::optional<BoundaryValue> meltingPressure(double T_K) const;
-    std::optional<BoundaryValue> vaporizationPressure(double T_K) const;       // Tt <= T <= Tc
-    std::optional<BoundaryValue> sublimationPressure(double T_K) const;        // T <= Tt
+    std::optional<BoundaryValue> vaporizationPressure(double T_K) const;  // Tt <= T <= Tc
+    std::optional<BoundaryValue> sublimationPressure(double T_K) const;   // T <= Tt
 
     // At 101 325 Pa; nullopt when the isobar does not meet that boundary.
     std::optional<double> normalMeltingPoint() const;

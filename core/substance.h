@@ -3,12 +3,14 @@
 // fixed points and the boundary curves with their sources. Pure data; the physics that uses
 // it lives in PhaseDiagram (core/phase_diagram.h).
 #include <limits>
+#include <map>
 #include <optional>
 #include <string>
 #include <string_view>
 #include <vector>
 
 #include "core/boundary_model.h"
+#include "core/model_spec.h"
 
 namespace pw {
 
@@ -29,10 +31,12 @@ struct Citation {
 
 struct Boundary {
     BoundaryKind kind = BoundaryKind::Vaporization;
-    std::string solidForm;  // melting/sublimation: which solid ("ice III"); solid-solid: "a|b"
-    BoundaryModelPtr model;
-    TRange validity;                   // published validity range
-    double uncertaintyRel = kNaN;      // stated relative uncertainty of p (optional)
+    std::string solidForm;   // melting/sublimation: which solid ("ice III"); solid-solid: "a|b"
+    ModelSpec spec;          // as read from the file (written back unchanged)
+    BoundaryModelPtr model;  // makeModel(spec)
+    TRange validity;         // published validity range
+    double uncertaintyRel = kNaN;  // stated relative uncertainty of p (optional)
+    std::string sourceKey;         // key into the file's "sources"
     Citation source;
     std::string note;
 
@@ -47,6 +51,7 @@ struct FixedPoint {
     double T_K = kNaN;
     double P_Pa = kNaN;
     std::vector<std::string> phases;  // triple points: e.g. {"ice Ih", "liquid", "vapor"}
+    std::string sourceKey;
     Citation source;
 };
 
@@ -64,7 +69,10 @@ struct Substance {
     // Optional data at the main triple point for the Clapeyron relations (J/mol, m^3/mol).
     double dHfusTriple_J_mol = kNaN;
     double dVfusTriple_m3_mol = kNaN;
+    std::map<std::string, Citation> sources;  // the file's "sources", by key
+    std::string fusionSourceKey;
     std::vector<std::string> hazards;
+    std::string notes;
     std::string origin;  // where it was loaded from: a path or "bundled:water.json"
 
     // Case-insensitive match on id, name, formula or alias.

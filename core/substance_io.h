@@ -15,13 +15,13 @@ inline constexpr int kSubstanceFormatVersion = 1;
 struct ValidationIssue {
     Severity severity = Severity::Error;
     std::string file;
-    std::string jsonPath;  // e.g. "/boundaries/2/coefficients/a"
-    std::string message;   // what is wrong and what was expected
+    std::string jsonPath;      // e.g. "/boundaries/2/coefficients/a"
+    std::string message;       // what is wrong and what was expected
     std::string text() const;  // "file: /json/path: message"
 };
 
 struct SubstanceReadResult {
-    std::optional<Substance> substance;  // empty when any Error-severity issue was found
+    std::optional<Substance> substance;   // empty when any Error-severity issue was found
     std::vector<ValidationIssue> issues;  // errors and warnings
 };
 

@@ -6,7 +6,7 @@
 namespace pw::bundled {
 
 struct File {
-    std::string_view path;     // relative to resources/, e.g. "substances/water.json"
+    std::string_view path;  // relative to resources/, e.g. "substances/water.json"
     std::string_view content;
 };
 

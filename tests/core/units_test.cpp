@@ -26,7 +26,7 @@ TEST(Units, PressureSpellings) {
     EXPECT_EQ(parsePressureUnit("\u00B5bar"), PressureUnit::ubar);
     EXPECT_EQ(parsePressureUnit("ubar"), PressureUnit::ubar);
     EXPECT_EQ(parsePressureUnit("psia"), PressureUnit::psi);
-    EXPECT_THROW(parsePressureUnit("mPa"), UnitError);  // millipascal: refused, not mistaken
+    EXPECT_THROW(parsePressureUnit("mPa"), UnitError);   // millipascal: refused, not mistaken
     EXPECT_THROW(parsePressureUnit("psig"), UnitError);  // gauge pressure is not absolute
     try {
         parsePressureUnit("furlongs");
