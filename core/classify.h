@@ -9,8 +9,11 @@
 // Margins: dT_K = T - T_boundary(p), dP_Pa = p - p_boundary(T) for the nearest boundary of
 // the point's region (NaN where that boundary does not exist at that T or p). For gas and
 // supercritical points the reference is the critical point (dT = T - Tc, dP = p - pc).
+#include <optional>
+#include <span>
 #include <string>
 #include <string_view>
+#include <vector>
 
 #include "core/phase_diagram.h"
 
@@ -42,6 +45,42 @@ struct Classification {
 // Throws DomainError for T <= 0, p <= 0 or non-finite input.
 Classification classify(const PhaseDiagram &diagram, double T_K, double P_Pa,
                         const ClassifyOptions &options = {});
+
+// The same classification for many points on one diagram: looks up the fixed points, the
+// curves and the melting segments once. Cheap to copy; keeps a reference to `diagram`.
+// classify() above is Classifier(diagram, options)(T, p).
+class Classifier {
+public:
+    explicit Classifier(const PhaseDiagram &diagram, ClassifyOptions options = {});
+    Classification operator()(double T_K, double P_Pa) const;
+    const PhaseDiagram &diagram() const { return *diagram_; }
+
+private:
+    struct Segment {
+        const Boundary *boundary = nullptr;
+        double pLow = kNaN, pHigh = kNaN;  // pressures at the segment's ends
+        double tLow = kNaN;                // lower of the segment's end temperatures
+    };
+    // A boundary bounding the point's region and its temperature at the point's pressure
+    // (boundary null: the critical point).
+    struct Candidate {
+        const Boundary *boundary = nullptr;
+        double T_K = kNaN;
+        bool extrapolated = false;
+    };
+    std::string solidFormAt(double T, double P, const Boundary *melt) const;
+    std::optional<BoundaryValue> pressureOn(const Boundary *b, double T) const;
+    static Candidate fromValue(const std::optional<BoundaryValue> &v);
+    void fillMargins(Classification &c, double T, double P,
+                     std::span<const Candidate> candidates) const;
+
+    const PhaseDiagram *diagram_;
+    ClassifyOptions options_;
+    double Tt_ = kNaN, pt_ = kNaN, Tc_ = kNaN, pc_ = kNaN;
+    std::vector<Segment> segments_;  // melting segments by increasing pressure
+    double lowestSolidSolidLiquid_Pa = kNaN;
+    std::string vaporSolidForm_;  // the solid that borders the vapor ("ice Ih", "solid")
+};
 
 // Space-separated flags for tables: "on_boundary", "within_uncertainty", "extrapolated".
 std::string flagsText(const Classification &c);

@@ -1,0 +1,226 @@
+// Classification of a state point and its margins (conventions: core/classify.h and
+// docs/classification.md).
+#include "core/classify.h"
+
+#include <fmt/format.h>
+
+#include <algorithm>
+#include <cmath>
+#include <limits>
+#include <optional>
+
+#include "core/errors.h"
+
+namespace pw {
+namespace {
+
+using OptValue = std::optional<BoundaryValue>;
+
+void checkState(double T, double P) {
+    if (!std::isfinite(T) || T <= 0.0)
+        throw DomainError(
+            fmt::format("temperature must be a finite number above 0 K (got {} K)", T));
+    if (!std::isfinite(P) || P <= 0.0)
+        throw DomainError(
+            fmt::format("pressure must be a finite number above 0 Pa (got {} Pa)", P));
+}
+
+std::string formOf(const Boundary *b) {
+    return (b == nullptr || b->solidForm.empty()) ? std::string("solid") : b->solidForm;
+}
+
+Classification unknown(std::string reason) {
+    Classification c;
+    c.phase = Phase::Unknown;
+    c.reason = std::move(reason);
+    return c;
+}
+
+}  // namespace
+
+std::string_view toString(Phase phase) {
+    switch (phase) {
+        case Phase::Solid:
+            return "solid";
+        case Phase::Liquid:
+            return "liquid";
+        case Phase::Vapor:
+            return "vapor";
+        case Phase::Gas:
+            return "gas";
+        case Phase::Supercritical:
+            return "supercritical";
+        case Phase::Unknown:
+            break;
+    }
+    return "unknown";
+}
+
+std::string flagsText(const Classification &c) {
+    std::string s;
+    auto add = [&s](const char *flag) {
+        if (!s.empty()) s += ' ';
+        s += flag;
+    };
+    if (c.onBoundary) add("on_boundary");
+    if (c.withinUncertainty) add("within_uncertainty");
+    if (c.extrapolated) add("extrapolated");
+    return s;
+}
+
+Classifier::Classifier(const PhaseDiagram &diagram, ClassifyOptions options)
+    : diagram_(&diagram), options_(options) {
+    if (const FixedPoint *tp = diagram.triplePoint()) {
+        Tt_ = tp->T_K;
+        pt_ = tp->P_Pa;
+    }
+    Tc_ = pc_ = std::numeric_limits<double>::infinity();  // no critical point: never gas
+    if (const FixedPoint *cp = diagram.criticalPoint()) {
+        Tc_ = cp->T_K;
+        pc_ = cp->P_Pa;
+    }
+    for (const Boundary *b : diagram.melting()) {
+        TRange r = b->validity.valid() ? b->validity : b->model->domain();
+        const double p1 = b->model->pressure(r.min_K);
+        const double p2 = b->model->pressure(r.max_K);
+        segments_.push_back({b, std::min(p1, p2), std::max(p1, p2), r.min_K});
+    }
+    const auto &tps = diagram.substance().triplePoints;
+    for (std::size_t i = 1; i < tps.size(); ++i)
+        if (!std::isfinite(lowestSolidSolidLiquid_Pa) || tps[i].P_Pa < lowestSolidSolidLiquid_Pa)
+            lowestSolidSolidLiquid_Pa = tps[i].P_Pa;
+    if (!std::isfinite(lowestSolidSolidLiquid_Pa) && segments_.size() > 1)
+        lowestSolidSolidLiquid_Pa = segments_.front().pHigh;
+    if (const Boundary *s = diagram.sublimation(); s && !s->solidForm.empty())
+        vaporSolidForm_ = s->solidForm;
+    else if (!diagram.melting().empty())
+        vaporSolidForm_ = formOf(diagram.melting().front());
+    else
+        vaporSolidForm_ = "solid";
+}
+
+std::string Classifier::solidFormAt(double T, double P, const Boundary *melt) const {
+    if (segments_.size() <= 1) return melt ? formOf(melt) : vaporSolidForm_;
+    for (const Segment &s : segments_)
+        if (P >= s.pLow && P <= s.pHigh && T >= s.tLow) return formOf(s.boundary);
+    if (P < lowestSolidSolidLiquid_Pa) return vaporSolidForm_;
+    return "unknown";
+}
+
+// The pressure of `b` at T where its segment exists at T (melting: inside its validity
+// range, or anywhere in its domain when it is the only melting curve).
+std::optional<BoundaryValue> Classifier::pressureOn(const Boundary *b, double T) const {
+    OptValue v;
+    switch (b->kind) {
+        case BoundaryKind::Vaporization:
+            v = diagram_->vaporizationPressure(T);
+            break;
+        case BoundaryKind::Sublimation:
+            v = diagram_->sublimationPressure(T);
+            break;
+        case BoundaryKind::Melting:
+            if (b->validity.valid() && b->validity.contains(T))
+                return BoundaryValue{b, b->model->pressure(T), false};
+            if (segments_.size() == 1) v = diagram_->meltingPressure(T);
+            break;
+        case BoundaryKind::SolidSolid:
+            break;
+    }
+    if (v && v->boundary != b) v.reset();
+    return v;
+}
+
+void Classifier::fillMargins(Classification &c, double T, double P,
+                             std::span<const Candidate> candidates) const {
+    const Candidate *best = nullptr;
+    for (const Candidate &k : candidates) {
+        c.extrapolated = c.extrapolated || k.extrapolated;
+        if (std::isfinite(k.T_K) && (!best || std::abs(T - k.T_K) < std::abs(T - best->T_K)))
+            best = &k;
+    }
+    if (!best) return;
+    double pOnCurve = kNaN;
+    c.dT_K = T - best->T_K;
+    c.nearest = best->boundary;
+    if (best->boundary == nullptr) {
+        c.nearestLabel = "critical point";
+        pOnCurve = pc_;
+    } else {
+        c.nearestLabel = best->boundary->label();
+        if (const OptValue v = pressureOn(best->boundary, T)) {
+            pOnCurve = v->value;
+            c.extrapolated = c.extrapolated || v->extrapolated;
+        }
+    }
+    c.dP_Pa = P - pOnCurve;
+    const bool hasDP = std::isfinite(c.dP_Pa);
+    c.onBoundary = std::abs(c.dT_K) <= options_.onBoundary_K ||
+                   (hasDP && std::abs(c.dP_Pa) <= options_.onBoundaryRel * pOnCurve);
+    if (best->boundary && hasDP && std::isfinite(best->boundary->uncertaintyRel))
+        c.withinUncertainty = std::abs(c.dP_Pa) <= best->boundary->uncertaintyRel * pOnCurve;
+}
+
+Classifier::Candidate Classifier::fromValue(const std::optional<BoundaryValue> &v) {
+    if (!v) return {};
+    return {v->boundary, v->value, v->extrapolated};
+}
+
+Classification Classifier::operator()(double T, double P) const {
+    checkState(T, P);
+    if (!std::isfinite(pt_)) return unknown("no triple-point data for this substance");
+    const Candidate critical{nullptr, Tc_, false};
+    Classification c;
+    if (T >= Tc_ && P < pc_) {
+        c.phase = Phase::Gas;
+        fillMargins(c, T, P, {&critical, 1});
+        return c;
+    }
+    if (P <= pt_) {
+        const OptValue sub = diagram_->sublimationTemperature(P);
+        if (!sub) return unknown(fmt::format("no sublimation curve at {} Pa", P));
+        const Candidate k = fromValue(sub);
+        c.phase = T < sub->value ? Phase::Solid : Phase::Vapor;
+        if (c.phase == Phase::Solid) c.solidForm = vaporSolidForm_;
+        fillMargins(c, T, P, {&k, 1});
+        return c;
+    }
+    const OptValue melt = diagram_->meltingTemperature(P);
+    if (melt && T < melt->value) {
+        const Candidate k = fromValue(melt);
+        c.phase = Phase::Solid;
+        c.solidForm = solidFormAt(T, P, melt->boundary);
+        fillMargins(c, T, P, {&k, 1});
+        return c;
+    }
+    if (P < pc_) {
+        const OptValue vap = diagram_->vaporizationTemperature(P);
+        if (!vap) return unknown(fmt::format("no vaporization curve at {} Pa", P));
+        const Candidate k[2] = {fromValue(vap), fromValue(melt)};
+        if (T >= vap->value) {
+            c.phase = Phase::Vapor;
+            fillMargins(c, T, P, {k, 1});
+            return c;
+        }
+        if (!melt)
+            return unknown(fmt::format("no melting curve at {} Pa: solid or liquid not known", P));
+        c.phase = Phase::Liquid;
+        fillMargins(c, T, P, k);
+        return c;
+    }
+    if (!melt)
+        return unknown(fmt::format("no melting curve at {} Pa: a solid cannot be ruled out", P));
+    const Candidate k[2] = {fromValue(melt), critical};
+    c.phase = T < Tc_ ? Phase::Liquid : Phase::Supercritical;
+    c.extrapolated = melt->extrapolated;
+    fillMargins(c, T, P,
+                c.phase == Phase::Liquid ? std::span<const Candidate>(k)
+                                         : std::span<const Candidate>(&critical, 1));
+    return c;
+}
+
+Classification classify(const PhaseDiagram &diagram, double T_K, double P_Pa,
+                        const ClassifyOptions &options) {
+    return Classifier(diagram, options)(T_K, P_Pa);
+}
+
+}  // namespace pw
