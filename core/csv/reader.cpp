@@ -1,0 +1,229 @@
+#include "core/csv/reader.h"
+
+#include <fmt/format.h>
+
+#include <algorithm>
+#include <array>
+#include <charconv>
+#include <cmath>
+#include <cstring>
+#include <istream>
+
+#include "core/errors.h"
+
+namespace pw::csv {
+namespace {
+
+constexpr std::string_view kBom = "\xEF\xBB\xBF";
+
+std::string_view trim(std::string_view s) {
+    while (!s.empty() && (s.front() == ' ' || s.front() == '\t')) s.remove_prefix(1);
+    while (!s.empty() && (s.back() == ' ' || s.back() == '\t')) s.remove_suffix(1);
+    return s;
+}
+
+std::string_view delimiterName(char d) {
+    return d == ',' ? "comma" : d == ';' ? "semicolon" : d == '\t' ? "tab" : "separator";
+}
+
+}  // namespace
+
+std::optional<std::string> parseNumber(std::string_view cell, bool decimalComma, double &out) {
+    std::string_view s = trim(cell);
+    if (s.empty()) return std::string("missing value");
+    std::string_view digits = s;
+    if (digits.front() == '+') digits.remove_prefix(1);
+    std::array<char, 64> local{};
+    if (decimalComma) {
+        if (digits.find('.') != std::string_view::npos)
+            return fmt::format(
+                "'{}' contains '.' but the file was declared to use a decimal "
+                "comma (thousands separators are not accepted)",
+                s);
+        if (digits.size() >= local.size()) return fmt::format("'{}' is not a number", s);
+        std::copy(digits.begin(), digits.end(), local.begin());
+        std::replace(local.begin(), local.begin() + digits.size(), ',', '.');
+        digits = std::string_view(local.data(), digits.size());
+    }
+    double v = 0.0;
+    const auto [ptr, ec] = std::from_chars(digits.data(), digits.data() + digits.size(), v);
+    if (ec == std::errc::result_out_of_range) return fmt::format("'{}' is out of range", s);
+    if (ec != std::errc() || ptr != digits.data() + digits.size()) {
+        if (!decimalComma && s.find(',') != std::string_view::npos)
+            return fmt::format(
+                "'{}' is not a number (if the file uses a decimal comma, declare "
+                "it: --decimal-comma)",
+                s);
+        return fmt::format("'{}' is not a number", s);
+    }
+    if (!std::isfinite(v)) return fmt::format("'{}' is not a finite number", s);
+    out = v;
+    return std::nullopt;
+}
+
+Reader::Reader(std::istream &in, std::string fileName, ReaderOptions options)
+    : in_(in), fileName_(std::move(fileName)), options_(options) {
+    buffer_.resize(std::max<std::size_t>(options_.bufferBytes, 4096));
+    if (!readRecord()) throw InputError(fileName_, 0, "", "the file is empty (no header line)");
+    std::string_view h = record_;
+    if (h.substr(0, kBom.size()) == kBom) h.remove_prefix(kBom.size());
+    headerRecord_ = std::string(h);
+    detectDelimiter();
+    if (options_.decimalComma && delimiter_ == ',')
+        throw InputError(fileName_, 1, "",
+                         "a decimal comma cannot be told apart from a comma separator; use a "
+                         "file separated by ';' or tabs");
+    record_ = headerRecord_;
+    split();
+    for (std::string_view f : fields_) header_.emplace_back(trim(f));
+    fields_.clear();
+}
+
+void Reader::detectDelimiter() {
+    if (options_.delimiter != '\0') {
+        delimiter_ = options_.delimiter;
+        return;
+    }
+    std::array<std::size_t, 3> counts{};
+    constexpr std::array<char, 3> kCandidates{',', ';', '\t'};
+    bool quoted = false;
+    for (char c : headerRecord_) {
+        if (c == '"') quoted = !quoted;
+        if (quoted) continue;
+        for (std::size_t i = 0; i < kCandidates.size(); ++i)
+            if (c == kCandidates[i]) ++counts[i];
+    }
+    std::size_t best = 0;
+    for (std::size_t i = 1; i < counts.size(); ++i)
+        if (counts[i] > counts[best]) best = i;
+    for (std::size_t i = 0; i < counts.size(); ++i)
+        if (i != best && counts[i] == counts[best] && counts[i] > 0)
+            throw InputError(
+                fileName_, 1, "",
+                fmt::format("cannot tell the separator: the header has as many {}s "
+                            "as {}s; give it explicitly (--separator)",
+                            delimiterName(kCandidates[best]), delimiterName(kCandidates[i])));
+    delimiter_ = counts[best] > 0 ? kCandidates[best] : ',';
+}
+
+bool Reader::fill() {
+    if (begin_ > 0) {
+        std::memmove(buffer_.data(), buffer_.data() + begin_, end_ - begin_);
+        end_ -= begin_;
+        begin_ = 0;
+    }
+    if (end_ == buffer_.size()) buffer_.resize(buffer_.size() * 2);  // a very long record
+    in_.read(buffer_.data() + end_, static_cast<std::streamsize>(buffer_.size() - end_));
+    const auto got = static_cast<std::size_t>(in_.gcount());
+    if (in_.bad()) throw InputError(fileName_, nextLine_, "", "read error");
+    end_ += got;
+    if (got == 0) eof_ = true;
+    return got > 0;
+}
+
+// Finds the next non-empty record, honouring quotes; sets record_, row_ and nextLine_.
+bool Reader::readRecord() {
+    std::size_t scanned = begin_;  // everything before this has no record end
+    for (;;) {
+        const char *data = buffer_.data();
+        std::size_t stop = end_;
+        long breaks = 0;
+        const void *nl = std::memchr(data + scanned, '\n', end_ - scanned);
+        const std::size_t lineEnd =
+            nl ? static_cast<std::size_t>(static_cast<const char *>(nl) - data) : end_;
+        const bool quotes = std::memchr(data + begin_, '"', lineEnd - begin_) != nullptr;
+        if (nl && !quotes) {
+            stop = lineEnd;
+        } else if (quotes) {
+            bool inside = false;
+            for (std::size_t i = begin_; i < end_; ++i) {
+                if (data[i] == '"') inside = !inside;
+                if (data[i] != '\n') continue;
+                if (!inside) {
+                    stop = i;
+                    break;
+                }
+                ++breaks;
+            }
+        }
+        if (stop == end_ && !eof_) {
+            scanned = end_ - begin_;
+            fill();
+            scanned += begin_;
+            continue;
+        }
+        if (stop == end_ && begin_ == end_) return false;
+        std::size_t len = stop - begin_;
+        if (len > 0 && data[begin_ + len - 1] == '\r') --len;
+        record_ = std::string_view(data + begin_, len);
+        row_ = nextLine_;
+        nextLine_ += 1 + breaks;
+        begin_ = stop == end_ ? end_ : stop + 1;
+        if (!record_.empty()) return true;
+        scanned = begin_;
+    }
+}
+
+void Reader::split() {
+    fields_.clear();
+    const char d = delimiter_;
+    std::string_view rest = record_;
+    if (rest.find('"') == std::string_view::npos) {
+        for (;;) {
+            const void *hit = std::memchr(rest.data(), d, rest.size());
+            if (!hit) break;
+            const auto n = static_cast<std::size_t>(static_cast<const char *>(hit) - rest.data());
+            fields_.push_back(rest.substr(0, n));
+            rest.remove_prefix(n + 1);
+        }
+        fields_.push_back(rest);
+        return;
+    }
+    scratch_.clear();
+    scratch_.reserve(record_.size());  // no reallocation below: views stay valid
+    std::size_t i = 0;
+    const std::size_t n = record_.size();
+    for (;;) {
+        const std::size_t start = scratch_.size();
+        const bool quoted = i < n && record_[i] == '"';
+        bool inside = quoted;
+        if (quoted) ++i;
+        for (; i < n; ++i) {
+            const char c = record_[i];
+            if (inside && c == '"') {
+                if (i + 1 < n && record_[i + 1] == '"') {
+                    scratch_ += '"';
+                    ++i;
+                } else {
+                    inside = false;
+                }
+                continue;
+            }
+            if (!inside && c == d) break;
+            scratch_ += c;
+        }
+        if (inside) throw InputError(fileName_, row_, "", "a quoted field is not closed");
+        fields_.emplace_back(scratch_.data() + start, scratch_.size() - start);
+        if (i >= n) break;
+        ++i;  // past the separator
+    }
+}
+
+bool Reader::next() {
+    if (!readRecord()) return false;
+    split();
+    if (fields_.size() != header_.size())
+        throw InputError(fileName_, row_, "",
+                         fmt::format("the row has {} fields but the header has {} ({}-separated)",
+                                     fields_.size(), header_.size(), delimiterName(delimiter_)));
+    return true;
+}
+
+double Reader::number(std::size_t column) const {
+    double v = 0.0;
+    if (auto why = parseNumber(fields_[column], options_.decimalComma, v))
+        throw InputError(fileName_, row_, header_[column], *why);
+    return v;
+}
+
+}  // namespace pw::csv

@@ -1,0 +1,79 @@
+#pragma once
+// A streaming reader for delimited text files (CSV and its relatives), built for logged runs
+// of millions of rows: memory stays flat (one buffer, grown only for a record longer than
+// it), fields are views into the buffer, numbers are parsed with std::from_chars.
+//
+// Conventions (docs/classification.md, "CSV files"):
+// - separator: ',', ';' or tab, detected from the header line unless given;
+// - fields may be quoted with '"' (a doubled quote inside is one quote; separators and line
+//   breaks inside quotes belong to the field);
+// - line ends LF or CRLF; a UTF-8 byte-order mark at the start is ignored; empty lines are
+//   skipped;
+// - numbers use '.' as decimal mark; ',' only when declared (decimalComma), and never
+//   together with a comma separator (ambiguous: refused);
+// - rows are counted as lines in the file, the header is row 1 (pw::InputError convention).
+#include <cstddef>
+#include <iosfwd>
+#include <optional>
+#include <string>
+#include <string_view>
+#include <vector>
+
+namespace pw::csv {
+
+struct ReaderOptions {
+    char delimiter = '\0';      // '\0': detect from the header line
+    bool decimalComma = false;  // numbers are written 12,5 (needs ';' or tab separator)
+    std::size_t bufferBytes = std::size_t{1} << 20;
+};
+
+// Why a cell is not a number, or nullopt when it is one (value in `out`). Accepts an optional
+// sign, surrounding blanks, and exponents; refuses empty cells, inf and nan.
+std::optional<std::string> parseNumber(std::string_view cell, bool decimalComma, double &out);
+
+class Reader {
+public:
+    // Reads the header at once; throws pw::InputError for an empty input, an undetectable
+    // separator or a decimal comma with a comma separator.
+    Reader(std::istream &in, std::string fileName, ReaderOptions options = {});
+
+    const std::string &fileName() const { return fileName_; }
+    char delimiter() const { return delimiter_; }
+    const std::vector<std::string> &header() const { return header_; }  // unquoted cells
+    const std::string &headerRecord() const { return headerRecord_; }   // raw header text
+
+    // Moves to the next data record; false at the end of the input. Throws pw::InputError when
+    // the record's field count differs from the header's (the reader has then moved past it,
+    // so a caller that skips bad rows may simply call next() again).
+    bool next();
+    long row() const { return row_; }
+    std::size_t fieldCount() const { return fields_.size(); }
+    std::string_view field(std::size_t i) const { return fields_[i]; }
+    std::string_view record() const { return record_; }  // raw text, without the line end
+
+    // The field as a number; throws pw::InputError naming file, row and the column's header.
+    double number(std::size_t column) const;
+
+private:
+    bool readRecord();
+    bool fill();
+    void split();
+    void detectDelimiter();
+
+    std::istream &in_;
+    std::string fileName_;
+    ReaderOptions options_;
+    std::vector<char> buffer_;
+    std::size_t begin_ = 0, end_ = 0;
+    bool eof_ = false;
+    long nextLine_ = 1;
+    long row_ = 0;
+    char delimiter_ = ',';
+    std::string_view record_;
+    std::vector<std::string_view> fields_;
+    std::string scratch_;  // unquoted copies of quoted fields
+    std::vector<std::string> header_;
+    std::string headerRecord_;
+};
+
+}  // namespace pw::csv
