@@ -1,0 +1,101 @@
+#include "app/cli/state_input.h"
+
+#include <fmt/format.h>
+
+#include <cmath>
+#include <fstream>
+#include <iostream>
+
+#include "core/errors.h"
+#include "core/library.h"
+#include "core/units.h"
+
+namespace pw::cli {
+
+std::shared_ptr<const PhaseDiagram> loadSubstance(const std::string &key) {
+    return SubstanceLibrary::withUserFolder(SubstanceLibrary::defaultUserFolder()).find(key);
+}
+
+void addStateFileOptions(CLI::App *cmd, StateFileOptions &o, bool withTime) {
+    cmd->add_option("--t-col", o.columns.tColumn,
+                    "temperature column (header text or its name before [unit]); default: "
+                    "the column named T, temperature or temp");
+    cmd->add_option("--p-col", o.columns.pColumn,
+                    "pressure column; default: the column named P or pressure");
+    if (withTime)
+        cmd->add_option("--time-col", o.columns.timeColumn,
+                        "time column (seconds, or [min]/[h]/[d], or ISO 8601 timestamps); "
+                        "default: a column named time or timestamp, if any");
+    cmd->add_option("--separator", o.separator,
+                    "column separator: ',', ';' or 'tab' (default: detected from the header)");
+    cmd->add_flag("--decimal-comma", o.decimalComma,
+                  "numbers use a decimal comma (12,5); needs ';' or tab separators");
+    cmd->add_flag("--skip-bad", o.skipBad,
+                  "skip bad rows (each reported on stderr, with a count) instead of failing");
+    o.columns.wantTime = withTime;
+}
+
+void addToleranceOptions(CLI::App *cmd, ClassifyOptions &o) {
+    cmd->add_option("--on-boundary-K", o.onBoundary_K, "on_boundary when |dT| is at most this (K)")
+        ->capture_default_str()
+        ->check(CLI::NonNegativeNumber);
+    cmd->add_option("--on-boundary-rel", o.onBoundaryRel,
+                    "on_boundary when |dP| is at most this fraction of the boundary pressure")
+        ->capture_default_str()
+        ->check(CLI::NonNegativeNumber);
+}
+
+csv::ReaderOptions readerOptions(const StateFileOptions &o) {
+    csv::ReaderOptions r;
+    r.decimalComma = o.decimalComma;
+    if (o.separator.empty()) return r;
+    if (o.separator == "," || o.separator == "comma") {
+        r.delimiter = ',';
+    } else if (o.separator == ";" || o.separator == "semicolon") {
+        r.delimiter = ';';
+    } else if (o.separator == "tab" || o.separator == "\\t" || o.separator == "\t") {
+        r.delimiter = '\t';
+    } else {
+        throw CLI::ValidationError("--separator",
+                                   "expected ',', ';' or 'tab', got '" + o.separator + "'");
+    }
+    return r;
+}
+
+InputFile::InputFile(const std::string &path, std::istream &standardInput)
+    : stream_(&standardInput) {
+    if (path == "-") return;
+    auto file = std::make_unique<std::ifstream>(path, std::ios::binary);
+    if (!*file) throw Error(fmt::format("{}: cannot open the file for reading", path));
+    owned_ = std::move(file);
+    stream_ = owned_.get();
+}
+
+RowState readState(const csv::Reader &reader, const csv::StateColumns &columns) {
+    const double t = reader.number(columns.t), p = reader.number(columns.p);
+    const double T = toKelvin(t, columns.tUnit), P = toPascal(p, columns.pUnit);
+    if (!(T > 0.0))
+        throw InputError(reader.fileName(), reader.row(), reader.header()[columns.t],
+                         fmt::format("{} {} is not a physical temperature (at or below 0 K)", t,
+                                     symbol(columns.tUnit)));
+    if (!(P > 0.0))
+        throw InputError(reader.fileName(), reader.row(), reader.header()[columns.p],
+                         fmt::format("{} {} is not a physical absolute pressure (must be above "
+                                     "0; gauge readings need the barometric pressure added)",
+                                     p, symbol(columns.pUnit)));
+    return {T, P};
+}
+
+double readTime(const csv::Reader &reader, const csv::StateColumns &columns) {
+    if (columns.time == csv::kNoColumn) return kNaN;
+    const std::string_view cell = reader.field(columns.time);
+    if (auto iso = csv::parseIsoTime(cell)) return *iso;
+    return reader.number(columns.time) * columns.secondsPerTimeUnit;
+}
+
+std::string badRowSummary(long count, const std::string &file) {
+    return fmt::format("{}: {} bad row{} skipped", file.empty() ? "<input>" : file, count,
+                       count == 1 ? "" : "s");
+}
+
+}  // namespace pw::cli
