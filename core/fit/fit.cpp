@@ -10,7 +10,7 @@
 namespace pw::fit {
 namespace {
 
-constexpr double kIllConditioned = 1e8;  // condition number above which a warning is given
+constexpr double kIllConditioned = 1e5;  // scaled condition number above which a warning is given
 
 Reference reference(double T, double P, const char *what, const std::string &model) {
     if (!(std::isfinite(T) && T > 0.0 && std::isfinite(P) && P > 0.0)) {
