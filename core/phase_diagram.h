@@ -6,6 +6,7 @@
 #include <string>
 #include <vector>
 
+#include "core/boundary_segment.h"
 #include "core/substance.h"
 
 namespace pw {
@@ -27,6 +28,12 @@ class PhaseDiagram {
 public:
     // Throws pw::Error when the data cannot form a diagram (no boundary at all...).
     explicit PhaseDiagram(Substance substance);
+    // Copies and moves re-point melting() into the new object's own substance.
+    PhaseDiagram(const PhaseDiagram &other);
+    PhaseDiagram(PhaseDiagram &&other) noexcept;
+    PhaseDiagram &operator=(const PhaseDiagram &other);
+    PhaseDiagram &operator=(PhaseDiagram &&other) noexcept;
+    ~PhaseDiagram() = default;
 
     const Substance &substance() const { return substance_; }
     const FixedPoint *triplePoint() const;  // solid–liquid–vapor, null if unknown
@@ -70,8 +77,20 @@ public:
     std::vector<Finding> consistency() const;
 
 private:
+    // Segment queries (core/phase_diagram.cpp). `seg` indexes segments_.
+    std::optional<BoundaryValue> segmentPressure(int seg, double T_K) const;
+    std::optional<BoundaryValue> segmentTemperature(int seg, double P_Pa) const;
+    std::optional<BoundaryValue> solveOutside(int seg, double P_Pa) const;
+    const Boundary &boundaryOf(int seg) const;
+    void buildSegments();
+    void relink();  // melting_ from meltingSegs_
+
     Substance substance_;
     std::vector<const Boundary *> melting_;
+    std::vector<BoundarySegment> segments_;  // one per boundary with a usable range
+    int vaporizationSeg_ = -1;
+    int sublimationSeg_ = -1;
+    std::vector<int> meltingSegs_;  // by increasing pressure
 };
 
 }  // namespace pw

@@ -1,0 +1,10 @@
+#include <fmt/format.h>
+#include <cmath>
+
+#include "core/phase_diagram.h"
+
+namespace pw {
+
+std::vector<Finding> PhaseDiagram::consistency() const { return {}; }
+
+}  // namespace pw

@@ -1,0 +1,109 @@
+#include "core/solver.h"
+
+#include <limits>
+
+#include "core/errors.h"
+
+namespace pw {
+
+namespace {
+
+// Newton is accepted once its predicted error K·step² is below this (K).
+constexpr double kNewtonTol_K = 1e-11;
+constexpr int kNewtonSteps = 3;
+
+}  // namespace
+
+LnPressure lnPressureOf(const BoundaryModel &model, double T) {
+    if (const auto *curve = dynamic_cast<const CurveModel *>(&model)) return curve->lnPressure(T);
+    const double p = model.pressure(T);
+    if (!(p > 0.0)) return {std::numeric_limits<double>::quiet_NaN(), 0.0};
+    return {std::log(p), model.dPdT(T) / p};
+}
+
+std::optional<double> solveTemperature(const BoundaryModel &model, double lnp, double lo,
+                                       double hi) {
+    const auto *curve = dynamic_cast<const CurveModel *>(&model);
+    if (curve != nullptr) {
+        return solveBracketed([&](double T) { return curve->lnPressure(T).lnp - lnp; }, lo, hi);
+    }
+    return solveBracketed([&](double T) { return lnPressureOf(model, T).lnp - lnp; }, lo, hi);
+}
+
+InverseTable::InverseTable(BoundaryModelPtr model, double T_lo, double T_hi, int intervals)
+    : model_(std::move(model)), curve_(dynamic_cast<const CurveModel *>(model_.get())) {
+    const LnPressure a = eval(T_lo);
+    const LnPressure b = eval(T_hi);
+    if (!(std::isfinite(a.lnp) && std::isfinite(b.lnp)) || a.lnp == b.lnp || intervals < 2) {
+        throw DomainError("inverse table: the curve '" + std::string(model_->form()) +
+                          "' is not monotonic and finite on its segment");
+    }
+    const bool rising = b.lnp > a.lnp;
+    lnpMin_ = std::min(a.lnp, b.lnp);
+    lnpMax_ = std::max(a.lnp, b.lnp);
+    const double step = (lnpMax_ - lnpMin_) / intervals;
+    invStep_ = 1.0 / step;
+    T_.resize(static_cast<std::size_t>(intervals) + 1);
+    m_.resize(T_.size());
+    std::vector<double> slope(T_.size());
+    const double Tstart = rising ? T_lo : T_hi;
+    const double Tend = rising ? T_hi : T_lo;
+    for (std::size_t k = 0; k < T_.size(); ++k) {
+        double T = Tend;
+        if (k == 0) {
+            T = Tstart;
+        } else if (k + 1 < T_.size()) {
+            const double target = lnpMin_ + step * static_cast<double>(k);
+            const auto root = solveTemperature(*model_, target, std::min(T_[k - 1], Tend),
+                                               std::max(T_[k - 1], Tend));
+            if (!root) throw DomainError("inverse table: curve not monotonic on its segment");
+            T = *root;
+        }
+        T_[k] = T;
+        slope[k] = eval(T).slope;
+        m_[k] = step / slope[k];
+    }
+    errK_.resize(T_.size() - 1);
+    for (std::size_t k = 0; k + 1 < T_.size(); ++k) {
+        const double dT = T_[k + 1] - T_[k];
+        const double g2 =
+            dT != 0.0 ? (slope[k + 1] - slope[k]) / dT : std::numeric_limits<double>::infinity();
+        const double g1 = std::min(std::abs(slope[k]), std::abs(slope[k + 1]));
+        // Safety factor 10 over the finite-difference estimate of |g''| / (2 |g'|).
+        errK_[k] = 10.0 * std::abs(g2) / (2.0 * g1);
+        if (!std::isfinite(errK_[k])) errK_[k] = std::numeric_limits<double>::infinity();
+    }
+}
+
+std::optional<double> InverseTable::temperature(double lnp) const {
+    const double x = (lnp - lnpMin_) * invStep_;
+    const std::size_t n = T_.size() - 1;
+    if (!(x >= 0.0 && x <= static_cast<double>(n))) return std::nullopt;
+    const std::size_t i = std::min(static_cast<std::size_t>(x), n - 1);
+    const double t = x - static_cast<double>(i);
+    const double t2 = t * t, t3 = t2 * t;
+    double lo = std::min(T_[i], T_[i + 1]);
+    double hi = std::max(T_[i], T_[i + 1]);
+    double T = (2 * t3 - 3 * t2 + 1) * T_[i] + (t3 - 2 * t2 + t) * m_[i] +
+               (-2 * t3 + 3 * t2) * T_[i + 1] + (t3 - t2) * m_[i + 1];
+    T = std::clamp(T, lo, hi);
+    for (int iter = 0; iter < kNewtonSteps; ++iter) {
+        const LnPressure e = eval(T);
+        const double g = e.lnp - lnp;
+        if (g == 0.0) return T;
+        // Shrink the bracket with the sign of g (ln p rises with T when slope > 0).
+        if ((g > 0.0) == (e.slope > 0.0)) {
+            hi = T;
+        } else {
+            lo = T;
+        }
+        const double stepT = g / e.slope;
+        const double next = T - stepT;
+        if (!(next >= lo && next <= hi)) break;
+        T = next;
+        if (errK_[i] * stepT * stepT <= kNewtonTol_K) return T;
+    }
+    return solveTemperature(*model_, lnp, lo, hi);
+}
+
+}  // namespace pw

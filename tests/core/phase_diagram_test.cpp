@@ -1,0 +1,171 @@
+// PhaseDiagram: segments, queries, normal points, Clapeyron verdicts, enthalpies and the
+// consistency findings, on water (IAPWS) and carbon dioxide (Span & Wagner 1996).
+#include "core/phase_diagram.h"
+
+#include <gtest/gtest.h>
+
+#include <cmath>
+#include <limits>
+
+#include "core/errors.h"
+#include "models/reference_specs.h"
+
+namespace pw {
+namespace {
+
+class WaterDiagram : public ::testing::Test {
+protected:
+    PhaseDiagram d{testdata::water()};
+};
+
+TEST_F(WaterDiagram, MeltingCurvesAreOrderedByPressure) {
+    ASSERT_EQ(d.melting().size(), 5u);
+    const char *order[] = {"ice Ih", "ice III", "ice V", "ice VI", "ice VII"};
+    for (std::size_t i = 0; i < 5; ++i) EXPECT_EQ(d.melting()[i]->solidForm, order[i]);
+    EXPECT_EQ(d.melting()[2]->label(), "melting (ice V)");
+}
+
+TEST_F(WaterDiagram, NormalPoints) {
+    // Common practice: water boils at 100 °C at 1 atm; IAPWS-95 value 373.124 K
+    // (IAPWS R6-95(2018), normal boiling point 373.1243 K). Auxiliary equation within 1 mK.
+    ASSERT_TRUE(d.normalBoilingPoint());
+    EXPECT_NEAR(*d.normalBoilingPoint(), 373.124, 1e-3);
+    // Common practice: ice melts at 0 °C at 1 atm; IAPWS R14-08 gives 273.1525 K.
+    ASSERT_TRUE(d.normalMeltingPoint());
+    EXPECT_NEAR(*d.normalMeltingPoint(), 273.1525, 5e-5);
+    // Common practice: ice does not sublime at 1 atm (1 atm is above the triple point).
+    EXPECT_FALSE(d.normalSublimationPoint());
+}
+
+TEST_F(WaterDiagram, MeltSlopeNegativeSoSolidIsLessDense) {
+    // Common practice (Clapeyron): ice floats; water's melting line has a negative slope.
+    ASSERT_TRUE(d.meltSlopeSign());
+    EXPECT_EQ(*d.meltSlopeSign(), -1);
+    ASSERT_TRUE(d.solidDenserThanLiquid());
+    EXPECT_FALSE(*d.solidDenserThanLiquid());
+}
+
+TEST_F(WaterDiagram, MeltingTemperatureFollowsTheIceForms) {
+    // IAPWS R14-08 Table 3 check values, read backwards: T_m(p) on each segment.
+    const struct {
+        double p_MPa, T_K;
+        const char *ice;
+    } cases[] = {{138.268, 260.0, "ice Ih"},
+                 {268.685, 254.0, "ice III"},
+                 {479.640, 265.0, "ice V"},
+                 {1356.76, 320.0, "ice VI"},
+                 {6308.71, 550.0, "ice VII"}};
+    for (const auto &c : cases) {
+        const auto v = d.meltingTemperature(c.p_MPa * 1e6);
+        ASSERT_TRUE(v) << c.ice;
+        EXPECT_EQ(v->boundary->solidForm, c.ice);
+        EXPECT_NEAR(v->value, c.T_K, 2e-3) << c.ice;  // 6 printed digits of p
+        EXPECT_FALSE(v->extrapolated);
+    }
+    EXPECT_FALSE(d.meltingTemperature(100.0));  // below the triple point: no melting
+    // Beyond ice VII's range (715 K, R14-08): still answered, flagged extrapolated (the
+    // equation turns at 720.3 K, so its domain ends there).
+    const auto pFar = d.meltingPressure(718.0);
+    ASSERT_TRUE(pFar);
+    EXPECT_TRUE(pFar->extrapolated);
+    const auto far = d.meltingTemperature(pFar->value);
+    ASSERT_TRUE(far);
+    EXPECT_TRUE(far->extrapolated);
+    EXPECT_NEAR(far->value, 718.0, 1e-9);
+}
+
+TEST_F(WaterDiagram, PressuresAtListEveryBoundaryThere) {
+    // At 255 K the liquid lies between the ice Ih and ice III melting curves (R14-08 ranges),
+    // and ice Ih sublimes.
+    const auto v = d.pressuresAt(255.0);
+    ASSERT_EQ(v.size(), 3u);
+    const auto mp = d.meltingPressure(255.0);
+    ASSERT_TRUE(mp);
+    EXPECT_EQ(mp->boundary->solidForm, "ice Ih");
+    // At 300 K: vaporization and ice VI melting only.
+    EXPECT_EQ(d.pressuresAt(300.0).size(), 2u);
+    // At 1 atm: boiling and melting.
+    EXPECT_EQ(d.temperaturesAt(101325.0).size(), 2u);
+}
+
+TEST_F(WaterDiagram, FreezeDryingNumbers) {
+    // FIELD-NOTES (IAPWS R14-08): ice vapor pressure 12.84 Pa at −40 °C, 103.2 Pa at −20 °C.
+    EXPECT_NEAR(d.sublimationPressure(233.15)->value, 12.84, 0.005);
+    EXPECT_NEAR(d.sublimationPressure(253.15)->value, 103.2, 0.05);
+    const auto frost = d.sublimationTemperature(12.84);
+    ASSERT_TRUE(frost);
+    EXPECT_NEAR(frost->value, 233.15, 1e-3);
+    // Below R14-08's 50 K lower limit the curve is extrapolated and says so.
+    const auto cold = d.sublimationPressure(40.0);
+    ASSERT_TRUE(cold);
+    EXPECT_TRUE(cold->extrapolated);
+}
+
+TEST_F(WaterDiagram, NonPhysicalInputThrows) {
+    EXPECT_THROW(d.pressuresAt(0.0), DomainError);
+    EXPECT_THROW(d.pressuresAt(-5.0), DomainError);
+    EXPECT_THROW(d.temperaturesAt(std::numeric_limits<double>::quiet_NaN()), DomainError);
+    EXPECT_THROW(d.meltingTemperature(std::numeric_limits<double>::infinity()), DomainError);
+    EXPECT_THROW(d.vaporizationPressure(-1.0), DomainError);
+    EXPECT_THROW(d.sublimationTemperature(0.0), DomainError);
+}
+
+TEST_F(WaterDiagram, SegmentsEndAtTheFixedPoints) {
+    EXPECT_FALSE(d.vaporizationPressure(273.0));     // below the triple point
+    EXPECT_FALSE(d.vaporizationPressure(650.0));     // above the critical point
+    EXPECT_FALSE(d.sublimationPressure(274.0));      // above the triple point
+    EXPECT_FALSE(d.vaporizationTemperature(30e6));   // above pc
+    EXPECT_TRUE(d.vaporizationTemperature(22.0e6));  // just below pc
+}
+
+TEST_F(WaterDiagram, EnthalpiesAtTheTriplePoint) {
+    // Handbook values at 0.01 °C (from memory, IAPWS-95 tables): ΔHvap ≈ 45.05 kJ/mol,
+    // ΔHsub ≈ 51.06 kJ/mol, ΔHfus ≈ 6.01 kJ/mol. Clausius–Clapeyron assumes an ideal vapor,
+    // good to about 0.1 % at 611 Pa.
+    ASSERT_TRUE(d.dHvapTriple());
+    EXPECT_NEAR(*d.dHvapTriple(), 45050.0, 150.0);
+    ASSERT_TRUE(d.dHsubTriple());
+    EXPECT_NEAR(*d.dHsubTriple(), 51060.0, 150.0);
+    ASSERT_TRUE(d.dHfusTriple());
+    EXPECT_NEAR(*d.dHfusTriple(), 6007.0, 100.0);
+}
+
+TEST_F(WaterDiagram, CopiesKeepWorkingPointers) {
+    PhaseDiagram copy = d;
+    {
+        PhaseDiagram moved = PhaseDiagram(testdata::water());
+        copy = moved;
+    }
+    ASSERT_EQ(copy.melting().size(), 5u);
+    EXPECT_EQ(copy.melting()[0], &copy.substance().boundaries[3]);
+    EXPECT_NEAR(*copy.normalMeltingPoint(), 273.1525, 5e-5);
+}
+
+TEST(Co2Diagram, SpanWagnerFacts) {
+    const PhaseDiagram d(testdata::carbonDioxide());
+    // Span & Wagner (1996), Table 3.1: normal sublimation temperature 194.685 K (±0.01 K).
+    ASSERT_TRUE(d.normalSublimationPoint());
+    EXPECT_NEAR(*d.normalSublimationPoint(), 194.685, 0.01);
+    // Common practice: CO2 has no normal boiling or melting point (1 atm < pt = 0.518 MPa).
+    EXPECT_FALSE(d.normalBoilingPoint());
+    EXPECT_FALSE(d.normalMeltingPoint());
+    // Span & Wagner (1996) eq. (3.10): dp/dT > 0, solid denser than liquid (common practice).
+    EXPECT_EQ(d.meltSlopeSign(), 1);
+    EXPECT_EQ(d.solidDenserThanLiquid(), true);
+    // Vapor pressure at the triple point equals pt within 0.01 % (Span & Wagner 1996,
+    // eq. 3.13 and Table 3.1).
+    const auto pv = d.vaporizationPressure(216.592);
+    ASSERT_TRUE(pv);
+    EXPECT_NEAR(pv->value / 0.51795e6, 1.0, 1e-4);
+    // Sublimation (eq. 3.12) meets pt too, by construction of the equation.
+    EXPECT_NEAR(d.sublimationPressure(216.592)->value / 0.51795e6, 1.0, 1e-12);
+}
+
+TEST(Co2Diagram, NoMeltingDataMeansNoDiagramOnlyWhenEmpty) {
+    Substance empty;
+    empty.id = "nothing";
+    EXPECT_THROW(PhaseDiagram{empty}, Error);
+}
+
+}  // namespace
+}  // namespace pw
