@@ -3,6 +3,7 @@
 // units taken from the header brackets ("T [degC]", "P [kPa]"), and checked before fitting.
 #include <cstddef>
 #include <iosfwd>
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -20,12 +21,18 @@ struct FitData {
     std::vector<FitPoint> points;
 };
 
-// Reads a CSV table (',', ';' or tab separated; '#' lines and blank lines skipped).
-// Columns by header name, case-insensitive: temperature "T", "temp", "temperature"; pressure
-// "P", "p_sat", "psat", "pressure"; optional "weight" or "w". Units are required in brackets
-// after the temperature and pressure names. Throws InputError naming file, row and field.
-FitData readFitCsv(std::istream &in, const std::string &fileName);
-FitData readFitCsvFile(const std::string &path);
+struct FitCsvOptions {
+    std::string tColumn;  // header text or name; empty: "T", "temperature", "temp"
+    std::string pColumn;  // empty: "P", "pressure"
+    std::optional<std::string> tUnit, pUnit;  // when the header has no brackets
+};
+
+// Reads a CSV table with the shared CSV reader (core/csv: ',', ';' or tab, quotes, units from
+// header brackets "T [degC]", "P [kPa]", else the options, else K and Pa). An optional column
+// "weight" (or "w") gives each point's weight. Throws InputError naming file, row and field.
+FitData readFitCsv(std::istream &in, const std::string &fileName,
+                   const FitCsvOptions &options = {});
+FitData readFitCsvFile(const std::string &path, const FitCsvOptions &options = {});
 
 // Checks the data for a fit with `parameterCount` parameters: at least two points, at least
 // as many points as parameters, finite positive T and p, finite positive weights, no

@@ -37,23 +37,33 @@ void expectInputError(F f, long row, const std::string &what) {
 }
 
 TEST(FitInput, ReadsUnitsFromHeaderBrackets) {
-    const auto d = csv("# comment\nT [degC]; P [kPa]; weight\n0; 0.611657; 2\n\n25;3.1698;1\n");
+    const auto d = csv("T [degC]; P [kPa]; weight\n0; 0.611657; 2\n\n25;3.1698;1\n");
     ASSERT_EQ(d.points.size(), 2u);
     EXPECT_DOUBLE_EQ(d.points[0].T_K, 273.15);
     EXPECT_DOUBLE_EQ(d.points[0].P_Pa, 611.657);
     EXPECT_DOUBLE_EQ(d.points[0].weight, 2.0);
-    EXPECT_EQ(d.points[0].row, 3);
-    EXPECT_EQ(d.points[1].row, 5);
+    EXPECT_EQ(d.points[0].row, 2);
+    EXPECT_EQ(d.points[1].row, 4);
     EXPECT_DOUBLE_EQ(d.points[1].P_Pa, 3169.8);
 }
 
-TEST(FitInput, MissingUnitNamesTheHeader) {
-    expectInputError([] { csv("T,P [Pa]\n300,1000\n"); }, 1, "no unit");
+TEST(FitInput, UnitOptionsApplyWithoutBrackets) {
+    std::istringstream in("temperature,pressure\n-40,12.84\n");
+    FitCsvOptions o;
+    o.tUnit = "degC";
+    o.pUnit = "Pa";
+    const auto d = readFitCsv(in, "data.csv", o);
+    ASSERT_EQ(d.points.size(), 1u);
+    EXPECT_DOUBLE_EQ(d.points[0].T_K, 233.15);
+}
+
+TEST(FitInput, UnknownUnitNamesTheHeader) {
+    expectInputError([] { csv("T [furlong],P [Pa]\n300,1000\n"); }, 1, "furlong");
 }
 
 TEST(FitInput, NotANumberNamesRowAndField) {
     expectInputError([] { csv("T [K],P [Pa]\n300,1000\n310,abc\n"); }, 3, "not a number");
-    expectInputError([] { csv("T [K],P [Pa]\n300,1000\nnan,2000\n"); }, 3, "not finite");
+    expectInputError([] { csv("T [K],P [Pa]\n300,1000\nnan,2000\n"); }, 3, "T [K]");
 }
 
 TEST(FitInput, NonPositivePressureIsRefused) {
