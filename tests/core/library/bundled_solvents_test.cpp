@@ -21,8 +21,8 @@ namespace {
 constexpr double kMmHg = 101325.0 / 760.0;  // Pa per mmHg (common practice)
 constexpr double kZeroC = 273.15;           // K
 
-constexpr std::string_view kIds[] = {"ammonia", "ethanol", "diethyl-ether", "acetone",
-                                     "tert-butanol"};
+constexpr std::string_view kIds[] = {"ammonia", "ethanol",      "diethyl-ether",
+                                     "acetone", "tert-butanol", "propane"};
 
 std::shared_ptr<const pw::PhaseDiagram> diagram(std::string_view key) {
     return pw::SubstanceLibrary::bundled().find(key);
@@ -226,4 +226,20 @@ TEST(BundledSolvents, TertButanolSolidIsDenserAndSublimesBelowItsTriplePoint) {
     EXPECT_GT(sub->value, 0.0);
     EXPECT_LT(sub->value, d->triplePoint()->P_Pa);
     EXPECT_NEAR(d->sublimationTemperature(sub->value)->value, 253.15, 1e-6);
+}
+
+// ---------------------------------------------------------------------------------------------
+// Propane
+
+TEST(BundledSolvents, PropaneBoilingPointAndStoragePressure) {
+    const auto d = diagram("R-290");
+    // Normal boiling point -42.1 degC (CRC Handbook of Chemistry and Physics, from memory).
+    // Tolerance 0.1 K.
+    EXPECT_NEAR(normalBoilingPoint(*d) - kZeroC, -42.1, 0.1);
+    // Vapor pressure of liquid propane at 20 degC: 8.36 bar absolute (LPG and R-290 tables,
+    // common practice, from memory). Tolerance 1 %.
+    EXPECT_NEAR(vapor(*d, kZeroC + 20.0) / 8.36e5, 1.0, 0.01);
+    // Triple point 85.525 K at about 1.7e-4 Pa (Lemmon, McLinden and Wagner 2009, from
+    // memory). Tolerance 5 %.
+    EXPECT_NEAR(vapor(*d, 85.525) / 1.7e-4, 1.0, 0.05);
 }
