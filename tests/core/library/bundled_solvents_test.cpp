@@ -21,8 +21,8 @@ namespace {
 constexpr double kMmHg = 101325.0 / 760.0;  // Pa per mmHg (common practice)
 constexpr double kZeroC = 273.15;           // K
 
-constexpr std::string_view kIds[] = {"ammonia", "ethanol",      "diethyl-ether",
-                                     "acetone", "tert-butanol", "propane"};
+constexpr std::string_view kIds[] = {"ammonia",      "ethanol", "diethyl-ether", "acetone",
+                                     "tert-butanol", "propane", "methanol"};
 
 std::shared_ptr<const pw::PhaseDiagram> diagram(std::string_view key) {
     return pw::SubstanceLibrary::bundled().find(key);
@@ -242,4 +242,21 @@ TEST(BundledSolvents, PropaneBoilingPointAndStoragePressure) {
     // Triple point 85.525 K at about 1.7e-4 Pa (Lemmon, McLinden and Wagner 2009, from
     // memory). Tolerance 5 %.
     EXPECT_NEAR(vapor(*d, 85.525) / 1.7e-4, 1.0, 0.05);
+}
+
+// ---------------------------------------------------------------------------------------------
+// Methanol
+
+TEST(BundledSolvents, MethanolBoilingPointVaporCurveAndToxicity) {
+    const auto d = diagram("methanol");
+    // Normal boiling point 64.6 degC (CRC Handbook of Chemistry and Physics, from memory).
+    // Tolerance 0.2 K.
+    EXPECT_NEAR(normalBoilingPoint(*d) - kZeroC, 64.6, 0.2);
+    for (double T : {298.15, 320.0, 337.85, 360.0}) {
+        // Reid, Prausnitz and Sherwood (1977), Appendix A: A = 18.5875, B = 3626.55,
+        // C = -34.29, 257 to 364 K. Tolerance 0.5 %.
+        EXPECT_NEAR(vapor(*d, T) / rpsAntoine(18.5875, 3626.55, -34.29, T), 1.0, 5e-3) << T;
+    }
+    // Methanol is toxic as well as flammable (common practice).
+    EXPECT_TRUE(anyHazardMentions(d->substance(), "Toxic"));
 }
