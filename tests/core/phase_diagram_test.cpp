@@ -161,6 +161,72 @@ TEST(Co2Diagram, SpanWagnerFacts) {
     EXPECT_NEAR(d.sublimationPressure(216.592)->value / 0.51795e6, 1.0, 1e-12);
 }
 
+const Finding *find(const std::vector<Finding> &fs, const std::string &check) {
+    for (const Finding &f : fs) {
+        if (f.check == check) return &f;
+    }
+    return nullptr;
+}
+
+TEST_F(WaterDiagram, PublishedCurvesAreConsistent) {
+    // IAPWS R14-08 and SR1-86 curves meet at the triple point (611.657 Pa) and end at the
+    // critical point: every finding is Info, except the enthalpy balance which is approximate.
+    const auto fs = d.consistency();
+    for (const Finding &f : fs) {
+        EXPECT_EQ(f.severity, Severity::Info) << f.check << ": " << f.message;
+    }
+    const Finding *tp = find(fs, "triple-point-mismatch");
+    ASSERT_NE(tp, nullptr);
+    EXPECT_NE(tp->message.find("611.657"), std::string::npos) << tp->message;
+    EXPECT_NE(find(fs, "critical-point-mismatch"), nullptr);
+    EXPECT_NE(find(fs, "enthalpy-sum"), nullptr);
+    EXPECT_NE(find(fs, "ranges-meet"), nullptr);
+    EXPECT_EQ(find(fs, "not-monotonic"), nullptr);
+}
+
+TEST(Consistency, FlagsMismatchedCurves) {
+    // A vaporization curve 5 % too high at the triple point must be an error (threshold 2 %,
+    // docs/substance-format.md "Validation"); one that stops 10 K short of Tc likewise.
+    Substance w = testdata::water();
+    Boundary &vap = w.boundaries[0];
+    vap.spec.scalars["P_ref"] *= 1.05;
+    vap.model = makeModel(vap.spec);
+    vap.validity.max_K = 637.0;
+    const auto fs = PhaseDiagram(w).consistency();
+    const Finding *tp = find(fs, "triple-point-mismatch");
+    ASSERT_NE(tp, nullptr);
+    EXPECT_EQ(tp->severity, Severity::Error) << tp->message;
+    const Finding *cp = find(fs, "critical-point-mismatch");
+    ASSERT_NE(cp, nullptr);
+    EXPECT_EQ(cp->severity, Severity::Error) << cp->message;
+    const Finding *end = find(fs, "vaporization-end");
+    ASSERT_NE(end, nullptr);
+    EXPECT_EQ(end->severity, Severity::Warning) << end->message;
+}
+
+TEST(Consistency, FlagsACurveThatTurns) {
+    // Ice VII's equation (R14-08 eq. 5) turns at 720.3 K: a range up to 800 K is not monotonic.
+    Substance w = testdata::water();
+    w.boundaries.back().validity.max_K = 800.0;
+    const auto fs = PhaseDiagram(w).consistency();
+    const Finding *f = find(fs, "not-monotonic");
+    ASSERT_NE(f, nullptr);
+    EXPECT_EQ(f->severity, Severity::Error);
+    EXPECT_NE(f->message.find("ice VII"), std::string::npos) << f->message;
+}
+
+TEST(Consistency, FlagsAGapBetweenIceForms) {
+    // Ice III's range starting at 252.5 K instead of 251.165 K (R14-08) leaves a gap.
+    Substance w = testdata::water();
+    w.boundaries[4].validity.min_K = 252.5;
+    const auto fs = PhaseDiagram(w).consistency();
+    bool flagged = false;
+    for (const Finding &f : fs) {
+        if (f.check == "ranges-meet" && f.severity != Severity::Info) flagged = true;
+    }
+    EXPECT_TRUE(flagged);
+}
+
 TEST(Co2Diagram, NoMeltingDataMeansNoDiagramOnlyWhenEmpty) {
     Substance empty;
     empty.id = "nothing";
