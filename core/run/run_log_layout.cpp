@@ -69,9 +69,15 @@ struct Column {
     std::vector<std::string> toks;
 };
 
+// A bracket unit that is none of time, temperature and pressure: the column is still found
+// by its name, and the unknown unit is then reported naming the column.
+bool unknownUnit(const std::string &u) {
+    return !u.empty() && !isTimeUnit(u) && !isTempUnit(u) && !pressureUnitKind(u).first;
+}
+
 int timeScore(const Column &c) {
     if (isTimeUnit(c.unit)) return 5;
-    if (!c.unit.empty()) return 0;
+    if (!c.unit.empty() && !unknownUnit(c.unit)) return 0;
     if (has(c.toks, {"time", "timestamp", "datetime", "date", "elapsed", "clock"})) return 4;
     return c.name == "t" ? 2 : 0;
 }
@@ -80,7 +86,7 @@ int temperatureScore(const Column &c) {
     int s = 0;
     if (isTempUnit(c.unit))
         s = 3;
-    else if (c.unit.empty() && has(c.toks, {"t", "temp", "temperature"}))
+    else if ((c.unit.empty() || unknownUnit(c.unit)) && has(c.toks, {"t", "temp", "temperature"}))
         s = 2;
     else
         return 0;
@@ -95,7 +101,7 @@ int pressureScore(const Column &c) {
     int s = 0;
     if (pressureUnitKind(c.unit).first)
         s = 3;
-    else if (c.unit.empty() && has(c.toks, {"p", "pressure", "press"}))
+    else if ((c.unit.empty() || unknownUnit(c.unit)) && has(c.toks, {"p", "pressure", "press"}))
         s = 2;
     else
         return 0;

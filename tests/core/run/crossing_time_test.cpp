@@ -26,7 +26,7 @@ TEST(RunCrossingTime, ReferenceCurvesReproducePublishedValues) {
 
 TEST(RunCrossingTime, IceSublimesWithinOneSampleOfTheFrostPoint) {
     // Ice warmed at 10 Pa, 0.01 K/s, sampled every 30 s (0.3 K).
-    const auto water = SubstanceLibrary::bundled().find("water");
+    const auto water = testref::diagramFor("water");
     const auto states = sampled(
         4000.0, 30.0, [](double t) { return 230.0 + 0.01 * t; }, [](double) { return 10.0; });
     const double Tstar =
@@ -41,7 +41,7 @@ TEST(RunCrossingTime, IceSublimesWithinOneSampleOfTheFrostPoint) {
 
 TEST(RunCrossingTime, LiquidCo2BoilsWithinOneSampleOfTheVaporPressure) {
     // Isothermal depressurisation of liquid CO2 at 280 K, 1 kPa/s, sampled every 10 s.
-    const auto co2 = SubstanceLibrary::bundled().find("carbon-dioxide");
+    const auto co2 = testref::diagramFor("carbon-dioxide");
     const auto states = sampled(
         2500.0, 10.0, [](double) { return 280.0; }, [](double t) { return 6e6 - 1e3 * t; });
     const double tStar = (6e6 - testref::co2VaporPa(280.0)) / 1e3;
@@ -55,7 +55,7 @@ TEST(RunCrossingTime, LiquidCo2BoilsWithinOneSampleOfTheVaporPressure) {
 TEST(RunCrossingTime, PlannedHeatingAboveTcEntersTheSupercriticalRegion) {
     // Liquid CO2 at 10 MPa heated 290 K -> 320 K over 30 min: Tc = 304.1282 K (Span &
     // Wagner 1996) is reached after (304.1282 - 290) / 30 * 1800 s = 847.7 s.
-    const auto co2 = SubstanceLibrary::bundled().find("carbon-dioxide");
+    const auto co2 = testref::diagramFor("carbon-dioxide");
     Plan plan;
     plan.start = {0.0, 290.0, 10e6};
     PlanStep heat;

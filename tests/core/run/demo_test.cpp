@@ -7,6 +7,7 @@
 #include "core/run/demo.h"
 #include "core/run/downsample.h"
 #include "core/run/run_analysis.h"
+#include "reference_curves.h"
 
 namespace pw::run {
 namespace {
@@ -26,7 +27,7 @@ struct Loaded {
 
 Loaded load(const std::string &id) {
     Loaded l{demoScenario(id), nullptr, {}, {}};
-    l.diagram = SubstanceLibrary::bundled().find(l.scenario.substance);
+    l.diagram = testref::diagramFor(l.scenario.substance);
     l.log = readDemoRun(l.scenario);
     l.rules = readDemoRules(l.scenario);
     return l;

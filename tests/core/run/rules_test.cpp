@@ -10,9 +10,7 @@
 namespace pw::run {
 namespace {
 
-std::shared_ptr<const PhaseDiagram> diagram(const char *id) {
-    return SubstanceLibrary::bundled().find(id);
-}
+std::shared_ptr<const PhaseDiagram> diagram(const char *id) { return testref::diagramFor(id); }
 
 // States every dt seconds from t = 0 to tEnd with T(t), P(t).
 template <typename FT, typename FP>
@@ -47,7 +45,8 @@ TEST(RunRules, TemperatureLimitWithInterpolatedFirstViolation) {
     EXPECT_NEAR(v[0].T_K, 260.0, 1e-9);
     EXPECT_EQ(v[0].index, 4u);  // the state at 120 s
     EXPECT_EQ(v[1].verdict, Verdict::Fail);
-    EXPECT_DOUBLE_EQ(v[1].firstViolation_s, 200.0);  // already violated where the window opens
+    EXPECT_DOUBLE_EQ(v[1].firstViolation_s,
+                     210.0);  // violated at the first sample inside the window
     EXPECT_EQ(v[2].verdict, Verdict::Pass);
     EXPECT_EQ(v[2].statesChecked, 4u);
     EXPECT_EQ(v[3].verdict, Verdict::NoData);
