@@ -80,7 +80,9 @@ TEST(BundledSolvents, FoundByIdAndCommonNames) {
         {"NH3", "ammonia"},         {"R-717", "ammonia"},
         {"EtOH", "ethanol"},        {"ethyl alcohol", "ethanol"},
         {"ether", "diethyl-ether"}, {"propanone", "acetone"},
-        {"TBA", "tert-butanol"},    {"tert-butyl alcohol", "tert-butanol"}};
+        {"TBA", "tert-butanol"},    {"tert-butyl alcohol", "tert-butanol"},
+        {"R-290", "propane"},       {"C3H8", "propane"},
+        {"MeOH", "methanol"},       {"CH3OH", "methanol"}};
     for (const auto &[key, id] : expected) {
         ASSERT_NO_THROW((void)lib.find(key)) << key;
         EXPECT_EQ(lib.find(key)->substance().id, id) << key;
