@@ -10,6 +10,7 @@ namespace {
 
 void addCommands(CLI::App &app, Io &io) {
     // One line per command; each lives in its own cmd_*.cpp.
+    addFitCommand(app, io);
     (void)app;
     (void)io;
 }
