@@ -111,9 +111,12 @@ void checkStates(const Rule &r, const std::vector<Constraint> &cs, std::span<con
     }
     if (out.statesChecked == 0) return;
     out.verdict = Verdict::Pass;
-    for (std::size_t k = 0; k < cs.size(); ++k)
-        out.detail += fmt::format("{}{} stayed within limits (extreme {:.6g} {})", k ? "; " : "",
-                                  cs[k].name, worst[k], cs[k].unit);
+    for (std::size_t k = 0; k < cs.size(); ++k) {
+        const bool hasMax = !std::isnan(cs[k].max);
+        out.detail += fmt::format("{}{} {} = {:.6g} {} (limit {} {:.6g} {})", k ? "; " : "",
+                                  hasMax ? "highest" : "lowest", cs[k].name, worst[k], cs[k].unit,
+                                  hasMax ? "<=" : ">=", hasMax ? cs[k].max : cs[k].min, cs[k].unit);
+    }
 }
 
 void checkTransitions(const Rule &r, std::span<const State> states, const PathResult &analysis,
