@@ -140,7 +140,16 @@ void PhaseDiagram::buildSegments() {
         last.pHi = std::max(model.pressure(last.T.min_K), model.pressure(last.T.max_K));
     }
     for (BoundarySegment &seg : segments_) {
-        seg.table = InverseTable(substance_.boundaries[seg.index].model, seg.T.min_K, seg.T.max_K);
+        // The table covers the published part of the segment; the extrapolated rest is
+        // answered by the bracketed solver alone.
+        const Boundary &b = substance_.boundaries[seg.index];
+        TRange t = seg.T;
+        if (b.validity.valid()) {
+            t.min_K = std::max(t.min_K, b.validity.min_K);
+            t.max_K = std::min(t.max_K, b.validity.max_K);
+        }
+        if (!t.valid()) t = seg.T;
+        seg.table = InverseTable(b.model, t.min_K, t.max_K);
     }
 }
 

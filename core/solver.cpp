@@ -46,18 +46,16 @@ InverseTable::InverseTable(BoundaryModelPtr model, double T_lo, double T_hi, int
     T_.resize(static_cast<std::size_t>(intervals) + 1);
     m_.resize(T_.size());
     std::vector<double> slope(T_.size());
-    const double Tstart = rising ? T_lo : T_hi;
     const double Tend = rising ? T_hi : T_lo;
+    const double infinity = std::numeric_limits<double>::infinity();
     for (std::size_t k = 0; k < T_.size(); ++k) {
-        double T = Tend;
-        if (k == 0) {
-            T = Tstart;
-        } else if (k + 1 < T_.size()) {
+        double T = k == 0 ? (rising ? T_lo : T_hi) : Tend;
+        if (k > 0 && k + 1 < T_.size()) {
             const double target = lnpMin_ + step * static_cast<double>(k);
-            const auto root = solveTemperature(*model_, target, std::min(T_[k - 1], Tend),
-                                               std::max(T_[k - 1], Tend));
-            if (!root) throw DomainError("inverse table: curve not monotonic on its segment");
-            T = *root;
+            const double guess = std::clamp(T_[k - 1] + m_[k - 1], std::min(T_[k - 1], Tend),
+                                            std::max(T_[k - 1], Tend));
+            T = refine(target, guess, std::min(T_[k - 1], Tend), std::max(T_[k - 1], Tend),
+                       infinity, 0.0);
         }
         T_[k] = T;
         slope[k] = eval(T).slope;
@@ -66,28 +64,35 @@ InverseTable::InverseTable(BoundaryModelPtr model, double T_lo, double T_hi, int
     errK_.resize(T_.size() - 1);
     for (std::size_t k = 0; k + 1 < T_.size(); ++k) {
         const double dT = T_[k + 1] - T_[k];
-        const double g2 =
-            dT != 0.0 ? (slope[k + 1] - slope[k]) / dT : std::numeric_limits<double>::infinity();
+        const double g2 = dT != 0.0 ? (slope[k + 1] - slope[k]) / dT : infinity;
         const double g1 = std::min(std::abs(slope[k]), std::abs(slope[k + 1]));
         // Safety factor 10 over the finite-difference estimate of |g''| / (2 |g'|).
         errK_[k] = 10.0 * std::abs(g2) / (2.0 * g1);
-        if (!std::isfinite(errK_[k])) errK_[k] = std::numeric_limits<double>::infinity();
+        if (!std::isfinite(errK_[k])) errK_[k] = infinity;
+        // Measure the Hermite error inside the interval against the exact inverse.
+        const double lo = std::min(T_[k], T_[k + 1]);
+        const double hi = std::max(T_[k], T_[k + 1]);
+        double worst = 0.0;
+        for (double t : {0.25, 0.5, 0.75}) {
+            const double target = lnpMin_ + step * (static_cast<double>(k) + t);
+            const double h = hermite(k, t);
+            worst = std::max(worst, std::abs(refine(target, h, lo, hi, infinity, 0.0) - h));
+        }
+        if (worst <= kTableExact_K) errK_[k] = -1.0;
     }
 }
 
-std::optional<double> InverseTable::temperature(double lnp) const {
-    const double x = (lnp - lnpMin_) * invStep_;
-    const std::size_t n = T_.size() - 1;
-    if (!(x >= 0.0 && x <= static_cast<double>(n))) return std::nullopt;
-    const std::size_t i = std::min(static_cast<std::size_t>(x), n - 1);
-    const double t = x - static_cast<double>(i);
+double InverseTable::hermite(std::size_t i, double t) const {
     const double t2 = t * t, t3 = t2 * t;
-    double lo = std::min(T_[i], T_[i + 1]);
-    double hi = std::max(T_[i], T_[i + 1]);
-    double T = (2 * t3 - 3 * t2 + 1) * T_[i] + (t3 - 2 * t2 + t) * m_[i] +
-               (-2 * t3 + 3 * t2) * T_[i + 1] + (t3 - t2) * m_[i + 1];
+    return (2 * t3 - 3 * t2 + 1) * T_[i] + (t3 - 2 * t2 + t) * m_[i] +
+           (-2 * t3 + 3 * t2) * T_[i + 1] + (t3 - t2) * m_[i + 1];
+}
+
+double InverseTable::refine(double lnp, double T, double lo, double hi, double errK,
+                            double tolK) const {
+    const int steps = std::isfinite(errK) ? kNewtonSteps : 20;
     T = std::clamp(T, lo, hi);
-    for (int iter = 0; iter < kNewtonSteps; ++iter) {
+    for (int iter = 0; iter < steps; ++iter) {
         const LnPressure e = eval(T);
         const double g = e.lnp - lnp;
         if (g == 0.0) return T;
@@ -101,9 +106,25 @@ std::optional<double> InverseTable::temperature(double lnp) const {
         const double next = T - stepT;
         if (!(next >= lo && next <= hi)) break;
         T = next;
-        if (errK_[i] * stepT * stepT <= kNewtonTol_K) return T;
+        // Quadratic convergence: the error after the step is about errK·step².
+        if (std::isfinite(errK) ? errK * stepT * stepT <= tolK
+                                : std::abs(stepT) <= kSolverRelTol * T) {
+            return T;
+        }
     }
-    return solveTemperature(*model_, lnp, lo, hi);
+    return solveTemperature(*model_, lnp, lo, hi).value_or(0.5 * (lo + hi));
+}
+
+std::optional<double> InverseTable::temperature(double lnp) const {
+    const double x = (lnp - lnpMin_) * invStep_;
+    const std::size_t n = T_.size() - 1;
+    if (!(x >= 0.0 && x <= static_cast<double>(n))) return std::nullopt;
+    const std::size_t i = std::min(static_cast<std::size_t>(x), n - 1);
+    const double T = hermite(i, x - static_cast<double>(i));
+    const double lo = std::min(T_[i], T_[i + 1]);
+    const double hi = std::max(T_[i], T_[i + 1]);
+    if (errK_[i] < 0.0) return std::clamp(T, lo, hi);
+    return refine(lnp, T, lo, hi, errK_[i], kNewtonTol_K);
 }
 
 }  // namespace pw

@@ -101,6 +101,28 @@ TEST_F(WaterDiagram, FreezeDryingNumbers) {
     EXPECT_TRUE(cold->extrapolated);
 }
 
+TEST_F(WaterDiagram, SegmentQueriesRoundTripWithinOneNanokelvin) {
+    // Acceptance criterion of issue 3 (|T − T(p(T))| <= 1e-9 K), densely, through the
+    // table-guided queries the classifier uses.
+    auto check = [](const Boundary &b, auto query) {
+        double worst = 0.0;
+        const int n = 20000;
+        for (int i = 1; i < n; ++i) {
+            const double T = b.validity.min_K + (b.validity.max_K - b.validity.min_K) * i / n;
+            const auto v = query(b.model->pressure(T));
+            ASSERT_TRUE(v) << b.label() << " at " << T;
+            ASSERT_EQ(v->boundary, &b) << b.label() << " at " << T;
+            worst = std::max(worst, std::abs(v->value - T));
+        }
+        EXPECT_LE(worst, 1e-9) << b.label();
+    };
+    check(*d.vaporization(), [&](double p) { return d.vaporizationTemperature(p); });
+    check(*d.sublimation(), [&](double p) { return d.sublimationTemperature(p); });
+    for (const Boundary *m : d.melting()) {
+        check(*m, [&](double p) { return d.meltingTemperature(p); });
+    }
+}
+
 TEST_F(WaterDiagram, NonPhysicalInputThrows) {
     EXPECT_THROW(d.pressuresAt(0.0), DomainError);
     EXPECT_THROW(d.pressuresAt(-5.0), DomainError);
