@@ -113,11 +113,14 @@ TEST(RunLog, ReportsProgressAndHonoursCancel) {
 }
 
 TEST(RunLog, ReadsTheFileInTheDataFolder) {
-    const RunLog log = readRunLogFile(std::string(PW_TEST_DATA_DIR) + "/small-run.csv");
+    const RunLog log =
+        readRunLogFile(std::string(PW_SOURCE_DIR) + "/tests/core/run/data/small-run.csv");
     ASSERT_EQ(log.states.size(), 5u);
     EXPECT_EQ(log.layout.header[log.layout.temperatureColumn], "product_T [degC]");
     EXPECT_DOUBLE_EQ(log.states[4].time_s, 120.0);
-    EXPECT_THROW(readRunLogFile(std::string(PW_TEST_DATA_DIR) + "/no-such-file.csv"), InputError);
+    EXPECT_THROW(
+        readRunLogFile(std::string(PW_SOURCE_DIR) + "/tests/core/run/data/no-such-file.csv"),
+        InputError);
 }
 
 }  // namespace
