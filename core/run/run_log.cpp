@@ -86,4 +86,26 @@ RunLog readRunLogFile(const std::string &path, const RunLogOptions &options,
                       size > 0 ? static_cast<std::size_t>(size) : 0);
 }
 
+RunLogPreview previewRunLog(std::istream &in, const std::string &file, const RunLogOptions &opt,
+                            std::size_t maxRows) {
+    csv::Reader reader(in, file, opt.csv);
+    if (!reader.next()) throw InputError(file, 2, "", "the log has a header but no data rows");
+    RunLogPreview out;
+    do {
+        std::vector<std::string> row;
+        for (std::size_t i = 0; i < reader.fieldCount(); ++i) row.emplace_back(reader.field(i));
+        out.rows.push_back(std::move(row));
+    } while (out.rows.size() < maxRows && reader.next());
+    const std::vector<std::string_view> first(out.rows.front().begin(), out.rows.front().end());
+    out.layout = guessLayout(reader.header(), first, opt, file);
+    return out;
+}
+
+RunLogPreview previewRunLogFile(const std::string &path, const RunLogOptions &options,
+                                std::size_t maxRows) {
+    std::ifstream in(path, std::ios::binary);
+    if (!in) throw InputError(path, 0, "", "cannot open the file");
+    return previewRunLog(in, path, options, maxRows);
+}
+
 }  // namespace pw::run

@@ -87,4 +87,16 @@ RunLog readRunLog(std::istream &in, const std::string &file, const RunLogOptions
 RunLog readRunLogFile(const std::string &path, const RunLogOptions &options = {},
                       const ProgressFn &progress = {}, const std::atomic<bool> *cancel = nullptr);
 
+// The first rows of a log with the guessed layout, for an import dialog: what the columns
+// are, what was chosen and why, and a few raw rows to show. Throws like readRunLog for an
+// unreadable header or a layout that cannot be guessed.
+struct RunLogPreview {
+    RunLogLayout layout;
+    std::vector<std::vector<std::string>> rows;  // raw cells of the first data rows
+};
+RunLogPreview previewRunLog(std::istream &in, const std::string &file,
+                            const RunLogOptions &options = {}, std::size_t maxRows = 20);
+RunLogPreview previewRunLogFile(const std::string &path, const RunLogOptions &options = {},
+                                std::size_t maxRows = 20);
+
 }  // namespace pw::run

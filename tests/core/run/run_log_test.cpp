@@ -123,5 +123,16 @@ TEST(RunLog, ReadsTheFileInTheDataFolder) {
         InputError);
 }
 
+TEST(RunLog, PreviewShowsTheGuessAndTheFirstRows) {
+    const RunLogPreview p =
+        previewRunLogFile(std::string(PW_SOURCE_DIR) + "/tests/core/run/data/small-run.csv", {}, 3);
+    ASSERT_EQ(p.rows.size(), 3u);
+    EXPECT_EQ(p.rows[0][0], "2026-03-14T08:00:00Z");
+    EXPECT_EQ(p.layout.timeFormat, TimeFormat::Iso8601);
+    EXPECT_EQ(p.layout.temperatureUnit, TemperatureUnit::Celsius);
+    EXPECT_EQ(p.layout.pressureUnit, PressureUnit::mTorr);
+    EXPECT_EQ(p.layout.header[p.layout.pressureColumn], "chamber_P [mTorr]");
+}
+
 }  // namespace
 }  // namespace pw::run
