@@ -59,6 +59,25 @@ TEST(RunDemo, FreezeDryingFreezesThenSublimesAndNeverMelts) {
     ASSERT_EQ(a.verdicts.size(), 5u);
 }
 
+TEST(RunDemo, AMeltBackInTheFreezeDryingRunFailsTheRule) {
+    // Pressure rise to 1 kPa (above the triple-point pressure 611.657 Pa, IAPWS R14-08) with
+    // the product at -0.5 degC and then +1 degC, 10 h into the run: the frozen product melts.
+    Loaded d = load("freeze-drying");
+    auto &s = d.log.states;
+    const std::size_t i = 10 * 120;  // 30 s samples
+    s[i] = {s[i].time_s, 272.65, 1000.0};
+    s[i + 1] = {s[i + 1].time_s, 274.15, 1000.0};
+    const RunAnalysis a = analyseStates(*d.diagram, s, &d.rules);
+    const auto melt = std::find_if(a.verdicts.begin(), a.verdicts.end(), [](const RuleVerdict &v) {
+        return v.ruleId == "no-melting-during-drying";
+    });
+    ASSERT_NE(melt, a.verdicts.end());
+    EXPECT_EQ(melt->verdict, Verdict::Fail);
+    EXPECT_GE(melt->firstViolation_s, s[i].time_s);
+    EXPECT_LE(melt->firstViolation_s, s[i + 1].time_s);
+    EXPECT_FALSE(allPassed(a.verdicts));
+}
+
 TEST(RunDemo, Co2DryingGoesSupercriticalWithoutCrossingLiquidVapor) {
     const Loaded d = load("co2-drying");
     EXPECT_EQ(d.log.layout.header[d.log.layout.temperatureColumn], "vessel_T [degC]");
