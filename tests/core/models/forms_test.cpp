@@ -7,7 +7,7 @@
 
 #include "core/errors.h"
 #include "core/solver.h"
-#include "models/reference_specs.h"
+#include "reference_specs.h"
 
 namespace pw {
 namespace {

@@ -6,7 +6,7 @@
 
 #include <cmath>
 
-#include "models/reference_specs.h"
+#include "reference_specs.h"
 
 namespace pw {
 namespace {

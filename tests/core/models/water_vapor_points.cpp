@@ -5,7 +5,7 @@
 #include <exception>
 #include <iostream>
 
-#include "models/reference_specs.h"
+#include "reference_specs.h"
 
 int main() {
     try {
