@@ -10,6 +10,9 @@ namespace {
 
 void addCommands(CLI::App &app, Io &io) {
     // One line per command; each lives in its own cmd_*.cpp.
+    addListCommand(app, io);
+    addInfoCommand(app, io);
+    addValidateCommand(app, io);
     addFitCommand(app, io);
     (void)app;
     (void)io;
