@@ -108,7 +108,8 @@ void writeFixedPoints(const PhaseDiagram &d, std::ostream &out) {
         const auto &tp = s.triplePoints[i];
         std::string phases;
         for (const auto &p : tp.phases) phases += (phases.empty() ? "" : "/") + p;
-        out << fmt::format("{:<22} {}{}\n", i == 0 ? "Triple point:" : "Other triple point:", point(tp),
+        out << fmt::format("{:<22} {}{}\n",
+                           i == 0 ? "Triple point:" : "Other triple point:", point(tp),
                            phases.empty() ? "" : "  [" + phases + "]");
     }
     out << fmt::format("{:<22} {}\n", "Critical point:",

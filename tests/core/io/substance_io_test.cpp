@@ -124,7 +124,8 @@ TEST_P(BrokenFile, IsRefusedWithItsSpecificMessage) {
 INSTANTIATE_TEST_SUITE_P(
     Catalogue, BrokenFile,
     testing::Values(
-        BrokenCase{"malformed.json", "", "malformed JSON at line 4, column 6: syntax error while parsing object"},
+        BrokenCase{"malformed.json", "",
+                   "malformed JSON at line 4, column 6: syntax error while parsing object"},
         BrokenCase{"empty.json", "", "malformed JSON at line 1, column 1"},
         BrokenCase{"binary-junk.json", "", "malformed JSON at line 1"},
         BrokenCase{"nul-in-string.json", "", "malformed JSON"},
