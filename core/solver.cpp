@@ -116,6 +116,7 @@ double InverseTable::refine(double lnp, double T, double lo, double hi, double e
 }
 
 std::optional<double> InverseTable::temperature(double lnp) const {
+    if (T_.empty()) return std::nullopt;
     const double x = (lnp - lnpMin_) * invStep_;
     const std::size_t n = T_.size() - 1;
     if (!(x >= 0.0 && x <= static_cast<double>(n))) return std::nullopt;

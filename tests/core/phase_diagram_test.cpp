@@ -249,6 +249,27 @@ TEST(Consistency, FlagsAGapBetweenIceForms) {
     EXPECT_TRUE(flagged);
 }
 
+TEST(Co2Diagram, SegmentQueriesRoundTripWithinOneNanokelvin) {
+    // Acceptance criterion of issue 3 on the Span & Wagner (1996) curves, through the queries.
+    const PhaseDiagram d(testdata::carbonDioxide());
+    double worst = 0.0;
+    for (int i = 1; i < 5000; ++i) {
+        const double f = i / 5000.0;
+        const double Tv = 216.592 + (304.1282 - 216.592) * f;
+        worst = std::max(
+            worst,
+            std::abs(d.vaporizationTemperature(d.vaporizationPressure(Tv)->value)->value - Tv));
+        const double Ts = 150.0 + (216.592 - 150.0) * f;
+        worst = std::max(
+            worst,
+            std::abs(d.sublimationTemperature(d.sublimationPressure(Ts)->value)->value - Ts));
+        const double Tm = 216.592 + (327.0 - 216.592) * f;
+        worst = std::max(worst,
+                         std::abs(d.meltingTemperature(d.meltingPressure(Tm)->value)->value - Tm));
+    }
+    EXPECT_LE(worst, 1e-9);
+}
+
 TEST(Co2Diagram, NoMeltingDataMeansNoDiagramOnlyWhenEmpty) {
     Substance empty;
     empty.id = "nothing";
