@@ -13,6 +13,9 @@ void addCommands(CLI::App &app, Io &io) {
     addListCommand(app, io);
     addInfoCommand(app, io);
     addValidateCommand(app, io);
+    addClassifyCommand(app, io);
+    addBoundaryCommand(app, io);
+    addPathCommand(app, io);
     addFitCommand(app, io);
     (void)app;
     (void)io;

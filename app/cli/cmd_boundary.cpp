@@ -9,6 +9,7 @@
 
 #include "app/cli/cli.h"
 #include "app/cli/state_input.h"
+#include "app/cli/substance_arg.h"
 #include "core/units.h"
 
 namespace pw::cli {
@@ -22,7 +23,7 @@ struct BoundaryArgs {
 };
 
 void runBoundary(const BoundaryArgs &a, Io &io) {
-    const auto diagram = loadSubstance(a.substance);
+    const auto diagram = loadSubstance(a.substance, io.err);
     const bool atT = a.T.has_value();
     const TemperatureUnit tu = parseTemperatureUnit(a.tUnit.value_or("K"));
     const PressureUnit pu = parsePressureUnit(a.pUnit.value_or("Pa"));
@@ -66,7 +67,7 @@ void addBoundaryCommand(CLI::App &app, Io &io) {
         "boundary",
         "Every phase boundary at a temperature (its pressure) or at a pressure (its "
         "temperature)");
-    cmd->add_option("--substance", a->substance, "substance id, name, formula or file")->required();
+    addSubstanceOption(cmd, a->substance);
     auto *t = cmd->add_option("--T", a->T, "temperature (unit: --t-unit, default K)");
     auto *p = cmd->add_option("--P", a->P, "absolute pressure (unit: --p-unit, default Pa)");
     t->excludes(p);

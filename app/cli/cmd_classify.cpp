@@ -10,6 +10,7 @@
 #include "app/cli/atomic_output.h"
 #include "app/cli/cli.h"
 #include "app/cli/state_input.h"
+#include "app/cli/substance_arg.h"
 #include "core/classify.h"
 #include "core/csv/writer.h"
 #include "core/errors.h"
@@ -49,7 +50,7 @@ void classifyPoint(const ClassifyArgs &a, Io &io) {
     const TemperatureUnit tu = parseTemperatureUnit(a.tUnit.value_or("K"));
     const PressureUnit pu = parsePressureUnit(a.pUnit.value_or("Pa"));
     const double T = toKelvin(*a.T, tu), P = toPascal(*a.P, pu);
-    const auto diagram = loadSubstance(a.substance);
+    const auto diagram = loadSubstance(a.substance, io.err);
     const Classification c = classify(*diagram, T, P, a.tolerance);
     if (a.json) {
         nlohmann::json j = toJson(c, T, P);
@@ -86,7 +87,7 @@ void writeRow(csv::Writer &w, std::string_view record, const Classification &c) 
 }
 
 void classifyFile(const ClassifyArgs &a, Io &io) {
-    const auto diagram = loadSubstance(a.substance);
+    const auto diagram = loadSubstance(a.substance, io.err);
     const Classifier classifier(*diagram, a.tolerance);
     const std::string name = a.file.input == "-" ? "<stdin>" : a.file.input;
     InputFile input(a.file.input, io.in);
@@ -128,7 +129,7 @@ void addClassifyCommand(CLI::App &app, Io &io) {
         "classify",
         "Phase of a state point (--T, --P) or of every row of a CSV file (--input), with the "
         "nearest boundary and the margins dT_K and dP_Pa to it");
-    cmd->add_option("--substance", a->substance, "substance id, name, formula or file")->required();
+    addSubstanceOption(cmd, a->substance);
     auto *t = cmd->add_option("--T", a->T, "temperature (unit: --t-unit, default K)");
     auto *p = cmd->add_option("--P", a->P, "absolute pressure (unit: --p-unit, default Pa)");
     cmd->add_option("--t-unit", a->tUnit, "temperature unit: K, degC, degF, degR");

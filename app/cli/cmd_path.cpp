@@ -10,6 +10,7 @@
 
 #include "app/cli/cli.h"
 #include "app/cli/state_input.h"
+#include "app/cli/substance_arg.h"
 #include "core/errors.h"
 #include "core/path.h"
 
@@ -130,7 +131,7 @@ void printText(const PathResult &r, const Run &run, std::ostream &out) {
 }
 
 void runPath(const PathArgs &a, Io &io) {
-    const auto diagram = loadSubstance(a.substance);
+    const auto diagram = loadSubstance(a.substance, io.err);
     const std::string name = a.file.input == "-" ? "<stdin>" : a.file.input;
     const Run run = readRun(a, io, name);
     const PathResult r = analysePath(*diagram, run.states, a.tolerance);
@@ -146,7 +147,7 @@ void addPathCommand(CLI::App &app, Io &io) {
     auto a = std::make_shared<PathArgs>();
     CLI::App *cmd = app.add_subcommand(
         "path", "Transitions crossed by a run or planned path (CSV of states, optionally timed)");
-    cmd->add_option("--substance", a->substance, "substance id, name, formula or file")->required();
+    addSubstanceOption(cmd, a->substance);
     cmd->add_option("--input", a->file.input, "CSV file of states in order ('-': stdin)")
         ->required();
     cmd->add_option("--t-unit", a->tUnit, "temperature unit (when the header has none)");

@@ -6,14 +6,14 @@
 #include <fstream>
 #include <iostream>
 
+#include "app/cli/substance_arg.h"
 #include "core/errors.h"
-#include "core/library.h"
 #include "core/units.h"
 
 namespace pw::cli {
 
-std::shared_ptr<const PhaseDiagram> loadSubstance(const std::string &key) {
-    return SubstanceLibrary::withUserFolder(SubstanceLibrary::defaultUserFolder()).find(key);
+std::shared_ptr<const PhaseDiagram> loadSubstance(const std::string &key, std::ostream &err) {
+    return resolveSubstance(key, err);
 }
 
 void addStateFileOptions(CLI::App *cmd, StateFileOptions &o, bool withTime) {

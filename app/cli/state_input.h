@@ -15,8 +15,8 @@
 
 namespace pw::cli {
 
-// The bundled library plus the user's folder; key = id, alias, formula, name or a file path.
-std::shared_ptr<const PhaseDiagram> loadSubstance(const std::string &key);
+// The --substance value resolved as every command does (app/cli/substance_arg.h).
+std::shared_ptr<const PhaseDiagram> loadSubstance(const std::string &key, std::ostream &err);
 
 // Options common to the commands that read state files.
 struct StateFileOptions {
