@@ -1,0 +1,55 @@
+// Fuzz target: the delimited-text reader (core/csv/reader.h) and the state-column resolver
+// (core/csv/columns.h). Byte 0 picks the separator, byte 1 the decimal comma and a small
+// buffer (so long records make the buffer grow). Every pw::Error is an accepted answer;
+// anything else (a crash, a sanitizer report, another exception) is a finding.
+#include <cstdint>
+#include <sstream>
+#include <string>
+
+#include "core/csv/columns.h"
+#include "core/csv/reader.h"
+#include "core/errors.h"
+#include "tests/fuzz/fuzz_input.h"
+
+namespace {
+
+void readAll(const pw::fuzz::Input &input) {
+    pw::csv::ReaderOptions options;
+    constexpr char kSeparators[] = {'\0', ',', ';', '\t'};
+    options.delimiter = kSeparators[input.option(0) % 4];
+    options.decimalComma = (input.option(1) & 1) != 0;
+    if ((input.option(1) & 2) != 0) options.bufferBytes = 16;  // clamped to the minimum
+    std::istringstream in{std::string(input.text)};
+    pw::csv::Reader reader(in, "fuzz.csv", options);
+    try {
+        pw::csv::StateColumnOptions columns;
+        columns.wantTime = (input.option(1) & 4) != 0;
+        (void)pw::csv::resolveStateColumns(reader.header(), columns, "fuzz.csv");
+    } catch (const pw::Error &) {
+    }
+    for (int rows = 0; rows < 100000; ++rows) {
+        try {
+            if (!reader.next()) break;
+            for (std::size_t i = 0; i < reader.fieldCount(); ++i) {
+                try {
+                    (void)reader.number(i);
+                } catch (const pw::InputError &) {
+                }
+                (void)pw::csv::parseIsoTime(reader.field(i));
+            }
+        } catch (const pw::InputError &) {
+            // a short or long row: the reader has moved past it
+        }
+    }
+}
+
+}  // namespace
+
+extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t *data, std::size_t size) {
+    const pw::fuzz::Input input(data, size, 2);
+    try {
+        readAll(input);
+    } catch (const pw::Error &) {
+    }
+    return 0;
+}
