@@ -13,29 +13,43 @@
 namespace pw::fit {
 namespace {
 
+// The reference data: the script's output, read by the fit's CSV reader, or why it failed.
+struct Reference {
+    FitData data;
+    std::string error;
+};
+
 // Runs the reference script with Debian's python3 (which has python3-iapws).
-FitData iapws95Saturation() {
-    const std::string cmd =
-        std::string("/usr/bin/python3 ") + PW_TEST_DATA_DIR + "/iapws95_water_saturation.py";
+Reference runReferenceScript() {
+    const std::string cmd = std::string("/usr/bin/python3 ") + PW_SOURCE_DIR +
+                            "/tests/core/fit/data/iapws95_water_saturation.py";
     std::unique_ptr<FILE, int (*)(FILE *)> pipe(::popen(cmd.c_str(), "r"), ::pclose);
-    if (!pipe) return {};
+    if (!pipe) return {{}, "cannot run " + cmd};
     std::string text;
     char buf[4096];
     while (const auto n = std::fread(buf, 1, sizeof buf, pipe.get())) text.append(buf, n);
-    std::istringstream in(text);
-    return readFitCsv(in, "iapws95_water_saturation.py output");
+    try {
+        std::istringstream in(text);
+        return {readFitCsv(in, "iapws95_water_saturation.py output"), ""};
+    } catch (const std::exception &e) {
+        return {{}, cmd + " gave no usable data (is python3-iapws installed?): " + e.what()};
+    }
+}
+
+// Computed once for the three tests (the script takes a few seconds).
+const Reference &reference() {
+    static const Reference ref = runReferenceScript();
+    return ref;
 }
 
 class Iapws95WaterFit : public ::testing::Test {
 protected:
-    static void SetUpTestSuite() { data_ = new FitData(iapws95Saturation()); }
-    static void TearDownTestSuite() {
-        delete data_;
-        data_ = nullptr;
+    void SetUp() override {
+        ASSERT_TRUE(reference().error.empty()) << reference().error;
+        data_ = &reference().data;
     }
-    static FitData *data_;
+    const FitData *data_ = nullptr;
 };
-FitData *Iapws95WaterFit::data_ = nullptr;
 
 TEST_F(Iapws95WaterFit, ReferenceDataAreThere) {
     ASSERT_EQ(data_->points.size(), 33u) << "python3-iapws did not deliver the reference data";
