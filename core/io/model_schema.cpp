@@ -198,7 +198,7 @@ void readParameters(const Json &parameters, const FormSchema &schema, const std:
     if (!reader.expectObject(parameters, path, "the model parameters")) return;
     for (const auto &[key, value] : parameters.items()) {
         const auto it = std::find_if(schema.params.begin(), schema.params.end(),
-                                     [&](const ParamSchema &p) { return p.name == key; });
+                                     [&k = key](const ParamSchema &p) { return p.name == k; });
         if (it == schema.params.end())
             reader.error(child(path, key),
                          fmt::format("unknown parameter '{}' for model '{}'; expected: {}", key,

@@ -40,8 +40,8 @@ StepKind parseKind(const std::string &s, const std::string &file, long row) {
 void requireOnly(const json &obj, std::initializer_list<const char *> allowed,
                  const std::string &file, long row) {
     for (const auto &[key, value] : obj.items()) {
-        const bool ok =
-            std::any_of(allowed.begin(), allowed.end(), [&key](const char *a) { return key == a; });
+        const bool ok = std::any_of(allowed.begin(), allowed.end(),
+                                    [&k = key](const char *a) { return k == a; });
         if (!ok) throw InputError(file, row, key, "unknown field");
     }
 }

@@ -79,7 +79,7 @@ Rule parseRule(const json &obj, const std::string &file, long row) {
         static const char *allowed[] = {"id",  "description", "check", "transitions",
                                         "min", "max",         "from",  "to"};
         if (std::none_of(std::begin(allowed), std::end(allowed),
-                         [&key](const char *a) { return key == a; }))
+                         [&k = key](const char *a) { return k == a; }))
             throw InputError(file, row, key, "unknown field");
     }
     Rule r;
