@@ -1,0 +1,146 @@
+// phasewright-cli classify / boundary / path, run in-process through pw::cli::run(): point
+// and file classification, units from header brackets, bad rows (no output file by default,
+// --skip-bad reports and counts), JSON shapes and exit codes.
+#include <gtest/gtest.h>
+#include <unistd.h>
+
+#include <filesystem>
+#include <fstream>
+#include <nlohmann/json.hpp>
+#include <sstream>
+
+#include "app/cli/cli.h"
+
+namespace pw::cli {
+namespace {
+
+namespace fs = std::filesystem;
+
+struct Result {
+    int code;
+    std::string out, err;
+};
+
+Result runCli(const std::vector<std::string> &args, const std::string &input = "") {
+    std::ostringstream out, err;
+    std::istringstream in(input);
+    const int code = run(args, Io{out, err, in});
+    return {code, out.str(), err.str()};
+}
+
+class CliClassify : public testing::Test {
+protected:
+    void SetUp() override {
+        dir_ = fs::temp_directory_path() / ("pw-cli-classify-" + std::to_string(::getpid()));
+        fs::remove_all(dir_);
+        fs::create_directories(dir_);
+    }
+    void TearDown() override { fs::remove_all(dir_); }
+    std::string file(const std::string &name, const std::string &text) {
+        const fs::path p = dir_ / name;
+        std::ofstream(p, std::ios::binary) << text;
+        return p.string();
+    }
+    std::size_t filesInDir() const {
+        return static_cast<std::size_t>(std::distance(fs::directory_iterator(dir_), {}));
+    }
+    fs::path dir_;
+};
+
+TEST_F(CliClassify, SinglePointJson) {
+    // -40 °C at 10 Pa: ice sublimes; R14-08 p_sub(233.15 K) = 12.8412 Pa (python3-iapws).
+    const Result r = runCli({"classify", "--substance", "water", "--T", "-40", "--t-unit", "degC",
+                             "--P", "10", "--json"});
+    ASSERT_EQ(r.code, kExitOk) << r.err;
+    const auto j = nlohmann::json::parse(r.out);
+    EXPECT_EQ(j["phase"], "vapor");
+    EXPECT_EQ(j["nearest_boundary"], "sublimation (ice Ih)");
+    EXPECT_NEAR(j["dP_Pa"].get<double>(), 10.0 - 12.841171771034436, 1e-6);
+}
+
+TEST_F(CliClassify, FileWithBracketUnitsFromStdin) {
+    // CO2 (Span & Wagner 1996): 15 °C at 60 bar is liquid, 40 °C at 100 bar supercritical.
+    const Result r = runCli({"classify", "--substance", "co2", "--input", "-"},
+                            "T [degC];P [bar]\n15;60\n40;100\n");
+    ASSERT_EQ(r.code, kExitOk) << r.err;
+    EXPECT_NE(r.out.find("T [degC];P [bar];phase;solid_form;nearest_boundary;dT_K;dP_Pa;"
+                         "on_boundary;flags\n"),
+              std::string::npos);
+    EXPECT_NE(r.out.find("15;60;liquid;"), std::string::npos);
+    EXPECT_NE(r.out.find("40;100;supercritical;;critical point;9.02"), std::string::npos);
+}
+
+TEST_F(CliClassify, BadRowFailsAndLeavesNoFile) {
+    const std::string in = file("in.csv", "T,P\n300,1e5\n300,abc\n");
+    const std::string out = (dir_ / "out.csv").string();
+    const Result r = runCli({"classify", "--substance", "water", "--input", in, "--output", out});
+    EXPECT_EQ(r.code, kExitBadInput);
+    EXPECT_NE(r.err.find("row 3"), std::string::npos);
+    EXPECT_NE(r.err.find("'P'"), std::string::npos);
+    EXPECT_FALSE(fs::exists(out));
+    EXPECT_EQ(filesInDir(), 1u);  // no temporary file left behind
+}
+
+TEST_F(CliClassify, SkipBadWritesGoodRowsAndCounts) {
+    const std::string in = file("in.csv", "T,P\n300,1e5\n300,abc\n-5,1e5\n250,1e5\n");
+    const std::string out = (dir_ / "out.csv").string();
+    const Result r =
+        runCli({"classify", "--substance", "water", "--input", in, "--output", out, "--skip-bad"});
+    ASSERT_EQ(r.code, kExitOk) << r.err;
+    EXPECT_NE(r.err.find("2 bad rows skipped"), std::string::npos);
+    std::ifstream f(out);
+    std::string line;
+    int lines = 0;
+    while (std::getline(f, line)) ++lines;
+    EXPECT_EQ(lines, 3);  // header + 2 good rows
+}
+
+TEST_F(CliClassify, BoundaryJsonAtPressure) {
+    // 1 atm on water: melting at 273.1525 K (R14-08) and boiling at 373.1243 K (SR1-86),
+    // python3-iapws inverted with brentq.
+    const Result r =
+        runCli({"boundary", "--substance", "water", "--P", "1", "--p-unit", "atm", "--json"});
+    ASSERT_EQ(r.code, kExitOk) << r.err;
+    const auto j = nlohmann::json::parse(r.out);
+    bool melt = false, vap = false;
+    for (const auto &b : j["boundaries"]) {
+        if (b["kind"] == "melting" && b.value("solid_form", "") == "ice Ih") {
+            melt = true;
+            EXPECT_NEAR(b["T_K"].get<double>(), 273.1525190797695, 1e-6);
+        }
+        if (b["kind"] == "vaporization") {
+            vap = true;
+            EXPECT_NEAR(b["T_K"].get<double>(), 373.1242958054116, 1e-5);
+            EXPECT_EQ(b["phases"], nlohmann::json({"liquid", "vapor"}));
+        }
+    }
+    EXPECT_TRUE(melt);
+    EXPECT_TRUE(vap);
+}
+
+TEST_F(CliClassify, PathJsonForSupercriticalDrying) {
+    const std::string in = file("run.csv",
+                                "time [min],T [degC],P [MPa]\n0,15,6\n10,15,10\n20,40,10\n"
+                                "30,40,0.1\n");
+    const Result r = runCli({"path", "--substance", "co2", "--input", in, "--json"});
+    ASSERT_EQ(r.code, kExitOk) << r.err;
+    const auto j = nlohmann::json::parse(r.out);
+    ASSERT_EQ(j["events"].size(), 2u);
+    EXPECT_EQ(j["events"][0]["transition"], "enter_supercritical");
+    // Tc = 304.1282 K (Span & Wagner 1996): 15 -> 40 °C over 600 s on the second leg.
+    EXPECT_NEAR(j["events"][0]["time"].get<double>(), 600.0 + 600.0 * (304.1282 - 288.15) / 25.0,
+                1e-3);
+    EXPECT_EQ(j["events"][1]["transition"], "leave_supercritical");
+    EXPECT_EQ(j["summary"]["crosses_liquid_vapor"], false);
+}
+
+TEST_F(CliClassify, UsageErrors) {
+    EXPECT_EQ(runCli({"classify", "--substance", "water", "--T", "300"}).code, kExitUsage);
+    EXPECT_EQ(runCli({"boundary", "--substance", "water", "--T", "300", "--P", "1"}).code,
+              kExitUsage);
+    EXPECT_EQ(runCli({"classify", "--substance", "water", "--T", "0", "--P", "1"}).code,
+              kExitBadInput);
+}
+
+}  // namespace
+}  // namespace pw::cli
