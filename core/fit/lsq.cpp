@@ -62,7 +62,7 @@ LmResult levenbergMarquardt(const ResidualFunction &f, const Eigen::VectorXd &x0
         const double costNew = ok ? rNew.squaredNorm() : INFINITY;
         if (costNew < cost) {
             // Converged when the cost no longer falls measurably.
-            const bool flat = cost - costNew <= 1e-15 * cost && mu < 1e-6;
+            const bool flat = cost - costNew <= 1e-14 * cost;
             s.x = xNew;
             s.r = rNew;
             s.J = JNew;
@@ -74,7 +74,7 @@ LmResult levenbergMarquardt(const ResidualFunction &f, const Eigen::VectorXd &x0
             }
         } else {
             mu *= 10.0;
-            if (mu > 1e20) {
+            if (mu > 1e12) {
                 s.converged = true;  // no descent direction left: at a minimum to precision
                 break;
             }
