@@ -1,0 +1,85 @@
+// Throughput of the pieces of `classify --input`: classification with margins (water, the
+// bundled data), CSV parsing and CSV formatting. Run: build/tests/bench/classify_bench.
+// End to end against Python: tests/bench/classify_vs_python.py.
+#include <benchmark/benchmark.h>
+
+#include <cmath>
+#include <random>
+#include <sstream>
+#include <vector>
+
+#include "core/classify.h"
+#include "core/csv/reader.h"
+#include "core/csv/writer.h"
+#include "core/library.h"
+
+namespace {
+
+struct Point {
+    double T, P;
+};
+
+std::vector<Point> waterPoints(std::size_t n) {
+    std::mt19937_64 rng(42);
+    std::uniform_real_distribution<double> t(200.0, 700.0), lp(0.0, std::log(200e6));
+    std::vector<Point> v(n);
+    for (Point &p : v) p = {t(rng), std::exp(lp(rng))};
+    return v;
+}
+
+void BM_ClassifyWater(benchmark::State &state) {
+    const auto diagram = pw::SubstanceLibrary::bundled().find("water");
+    const pw::Classifier classify(*diagram);
+    const auto points = waterPoints(4096);
+    std::size_t i = 0;
+    for (auto _ : state) {
+        const Point &p = points[i++ & 4095];
+        benchmark::DoNotOptimize(classify(p.T, p.P));
+    }
+    state.SetItemsProcessed(state.iterations());
+}
+BENCHMARK(BM_ClassifyWater);
+
+std::string csvText(std::size_t rows) {
+    std::string s = "T [K],P [Pa]\n";
+    for (const Point &p : waterPoints(rows))
+        s += std::to_string(p.T) + "," + std::to_string(p.P) + "\n";
+    return s;
+}
+
+void BM_CsvRead(benchmark::State &state) {
+    const std::string text = csvText(100000);
+    for (auto _ : state) {
+        std::istringstream in(text);
+        pw::csv::Reader r(in, "bench.csv");
+        double sum = 0.0;
+        while (r.next()) sum += r.number(0) + r.number(1);
+        benchmark::DoNotOptimize(sum);
+    }
+    state.SetItemsProcessed(state.iterations() * 100000);
+    state.SetBytesProcessed(state.iterations() * static_cast<long>(text.size()));
+}
+BENCHMARK(BM_CsvRead)->Unit(benchmark::kMillisecond);
+
+void BM_CsvWrite(benchmark::State &state) {
+    const auto points = waterPoints(100000);
+    for (auto _ : state) {
+        std::ostringstream out;
+        pw::csv::Writer w(out);
+        for (const Point &p : points) {
+            w.raw("300,1e5");
+            w.field("liquid");
+            w.field(p.T);
+            w.field(p.P);
+            w.endRow();
+        }
+        w.flush();
+        benchmark::DoNotOptimize(out.str().size());
+    }
+    state.SetItemsProcessed(state.iterations() * 100000);
+}
+BENCHMARK(BM_CsvWrite)->Unit(benchmark::kMillisecond);
+
+}  // namespace
+
+BENCHMARK_MAIN();
