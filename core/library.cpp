@@ -71,10 +71,11 @@ std::string suggestions(const std::vector<std::shared_ptr<const PhaseDiagram>> &
         for (const auto &n : names) {
             if (n.empty()) continue;
             const std::string l = lower(n);
-            const std::size_t dist = l.find(k) != std::string::npos ? 0 : distance(k, l);
+            const bool contains = k.size() >= 3 && l.find(k) != std::string::npos;
+            const std::size_t dist = contains ? 0 : distance(k, l);
             best = std::min(best, dist);
         }
-        if (best <= std::max<std::size_t>(2, k.size() / 3)) ranked.emplace_back(best, s.id);
+        if (best <= std::max<std::size_t>(1, k.size() / 3)) ranked.emplace_back(best, s.id);
     }
     std::sort(ranked.begin(), ranked.end());
     if (ranked.empty()) {

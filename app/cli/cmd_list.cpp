@@ -54,8 +54,11 @@ void writeTable(const SubstanceLibrary &lib, std::ostream &out) {
     for (const auto &d : lib.all()) {
         const Substance &s = d->substance();
         std::string sources;
-        for (const auto &[key, c] : s.sources)
-            sources += (sources.empty() ? "" : "; ") + shortCitation(c);
+        for (const auto &[key, c] : s.sources) {
+            const std::string cite = shortCitation(c);
+            if (sources.find(cite) == std::string::npos)
+                sources += (sources.empty() ? "" : "; ") + cite;
+        }
         out << fmt::format("{:<{}}  {:<{}}  {:<{}}  {}\n", s.id, idWidth, s.name, nameWidth,
                            s.formula.empty() ? "-" : s.formula, formulaWidth, sources);
     }

@@ -19,7 +19,8 @@ inline constexpr const char *kSubstanceHelp =
 CLI::Option *addSubstanceOption(CLI::App *cmd, std::string &key);
 
 // The bundled library plus the user's folder. Findings about the user's files (a refused
-// file, a duplicate id) are written to `err` as "phasewright-cli: note: ..." lines.
+// file, a duplicate id, warnings) and refused bundled files are written to `err` as
+// "phasewright-cli: note: ..." lines.
 SubstanceLibrary loadLibrary(std::ostream &err);
 
 // Resolves a --substance value. A file is read and validated: its warnings go to `err`, a
