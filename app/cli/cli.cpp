@@ -17,6 +17,9 @@ void addCommands(CLI::App &app, Io &io) {
     addBoundaryCommand(app, io);
     addPathCommand(app, io);
     addFitCommand(app, io);
+#ifdef PW_HAVE_GUI
+    addPlotCommand(app, io);
+#endif
     (void)app;
     (void)io;
 }

@@ -1,0 +1,97 @@
+#include "widgets/figure/figure_caption.h"
+
+#include <QRegularExpression>
+#include <utility>
+#include <vector>
+
+namespace pw::ui {
+namespace {
+
+QString q(const std::string &s) { return QString::fromStdString(s); }
+
+// Authors split on ",", ";", " and " and "&" (an "A. B. Surname" list or "Surname, A.").
+QStringList authorList(const QString &authors) {
+    static const QRegularExpression sep(QStringLiteral(R"(\s*(?:;|,|&|\band\b)\s*)"));
+    QStringList parts = authors.split(sep, Qt::SkipEmptyParts);
+    // "Wagner, W." style: drop initials-only parts.
+    static const QRegularExpression initials(QStringLiteral(R"(^(?:[A-Z]\.\s*-?)+$)"));
+    parts.removeIf([](const QString &p) { return initials.match(p.trimmed()).hasMatch(); });
+    return parts;
+}
+
+QString surname(const QString &author) {
+    const QStringList words = author.trimmed().split(QLatin1Char(' '), Qt::SkipEmptyParts);
+    return words.isEmpty() ? author : words.back();
+}
+
+struct SourceGroup {
+    std::string key;
+    Citation citation;
+    QStringList boundaries;
+    QStringList forms;
+};
+
+std::vector<SourceGroup> groupBySource(const Substance &s) {
+    std::vector<SourceGroup> groups;
+    for (const Boundary &b : s.boundaries) {
+        auto it = std::find_if(groups.begin(), groups.end(),
+                               [&](const SourceGroup &g) { return g.key == b.sourceKey; });
+        if (it == groups.end()) {
+            groups.push_back({b.sourceKey, b.source, {}, {}});
+            it = std::prev(groups.end());
+        }
+        if (!it->boundaries.contains(q(b.label()))) it->boundaries << q(b.label());
+        if (!it->forms.contains(q(b.spec.form))) it->forms << q(b.spec.form);
+    }
+    return groups;
+}
+
+}  // namespace
+
+QString shortCitation(const Citation &c) {
+    const QStringList authors = authorList(q(c.authors));
+    QString who;
+    if (authors.size() == 1)
+        who = authors.front().trimmed();
+    else if (authors.size() == 2)
+        who = surname(authors[0]) + QStringLiteral(" & ") + surname(authors[1]);
+    else if (authors.size() > 2)
+        who = surname(authors[0]) + QStringLiteral(" et al.");
+    QString text = who;
+    if (c.year > 0) text += QStringLiteral(" (%1)").arg(c.year);
+    const QString where = c.publication.empty() ? q(c.title) : q(c.publication);
+    if (!where.isEmpty()) text += (text.isEmpty() ? QString() : QStringLiteral(", ")) + where;
+    if (!c.note.empty()) text += QStringLiteral(" (%1)").arg(q(c.note));
+    return text.isEmpty() ? QStringLiteral("source not given") : text;
+}
+
+QStringList sourceCaption(const DiagramScene &scene) {
+    QStringList out;
+    for (const DiagramPtr &d : scene.substances) {
+        if (!d) continue;
+        const Substance &s = d->substance();
+        QStringList parts;
+        for (const SourceGroup &g : groupBySource(s))
+            parts << QStringLiteral("%1 [%2] — %3")
+                         .arg(g.boundaries.join(QStringLiteral(", ")),
+                              g.forms.join(QStringLiteral(", ")), shortCitation(g.citation));
+        QString head = q(s.name);
+        if (!s.formula.empty()) head += QStringLiteral(" (%1)").arg(q(s.formula));
+        out << head + QStringLiteral(": ") + parts.join(QStringLiteral("; "));
+    }
+    return out;
+}
+
+QString versionLine(const QDate &date) {
+    return QStringLiteral("Phasewright %1 · %2 · boundaries dashed outside their published range")
+        .arg(QStringLiteral(PW_VERSION), date.toString(Qt::ISODate));
+}
+
+QString cautionLine() {
+    return QStringLiteral(
+        "Caution: high-pressure, cryogenic and vacuum work follows the applicable "
+        "pressure-equipment codes and site procedures; this diagram supports engineering "
+        "judgement and replaces neither.");
+}
+
+}  // namespace pw::ui
