@@ -66,6 +66,10 @@ MainWindow::MainWindow(Settings &settings, SubstanceLibrary &library, const QStr
     cursorStatus_ = new QLabel(this);
     statusBar()->addPermanentWidget(cursorStatus_);
     resize(1280, 820);
+    resizeDocks({findChild<QDockWidget *>(QStringLiteral("substanceDock")),
+                 findChild<QDockWidget *>(QStringLiteral("readoutDock"))},
+                {210, 330}, Qt::Horizontal);
+    resizeDocks({findChild<QDockWidget *>(QStringLiteral("pointsDock"))}, {230}, Qt::Vertical);
     restoreGeometry(settings_.windowGeometry());
     restoreState(settings_.windowState());
     DiagramPtr initial;
@@ -81,7 +85,13 @@ MainWindow::MainWindow(Settings &settings, SubstanceLibrary &library, const QStr
                              8000);
 }
 
-MainWindow::~MainWindow() = default;
+MainWindow::~MainWindow() {
+    // Members (doc_) die before QWidget deletes the children, so the children that refer to
+    // the document go first.
+    delete session_;
+    qDeleteAll(findChildren<QDockWidget *>(Qt::FindDirectChildrenOnly));
+    delete diagram_;
+}
 
 void MainWindow::buildDocks() {
     auto dock = [this](const QString &title, const QString &name, QWidget *w,
@@ -227,14 +237,16 @@ void MainWindow::connectModel() {
         edit::addPoint(doc_, {QString(), T, P});
         statusBar()->showMessage(tr("Added %1").arg(doc_.points().back().label), 4000);
     });
-    connect(diagram_, &DiagramWidget::cursorMoved, this, [this](double T, double P) {
-        if (const DiagramPtr d = doc_.primary()) readout_->showState(*d, T, P, settings_.units());
-        cursorStatus_->setText(QStringLiteral("%1   %2   %3")
-                                   .arg(temperatureWithUnit(T, settings_.units().temperature),
-                                        pressureWithUnit(P, settings_.units().pressure),
-                                        readout_->phaseShown()));
-    });
+    connect(diagram_, &DiagramWidget::cursorMoved, this, &MainWindow::showCursorState);
     connect(diagram_, &DiagramWidget::cursorLeft, this, [this] { cursorStatus_->clear(); });
+}
+
+void MainWindow::showCursorState(double T_K, double P_Pa) {
+    const DisplayUnits u = settings_.units();
+    if (const DiagramPtr d = doc_.primary()) readout_->showState(*d, T_K, P_Pa, u);
+    cursorStatus_->setText(QStringLiteral("%1   %2   %3")
+                               .arg(temperatureWithUnit(T_K, u.temperature),
+                                    pressureWithUnit(P_Pa, u.pressure), readout_->phaseShown()));
 }
 
 void MainWindow::updateTitle() {

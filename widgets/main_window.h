@@ -45,6 +45,8 @@ public:
     void showCautionIfFirstRun();
     // Water with a few freeze-drying points (the demo scenario helper builds on this).
     void loadDemo();
+    // Show the readout (and the status bar) for a state, as when the cursor is there.
+    void showCursorState(double T_K, double P_Pa);
 
 protected:
     void closeEvent(QCloseEvent *event) override;

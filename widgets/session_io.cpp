@@ -42,12 +42,13 @@ void readUnits(const Reader &r, const QJsonObject &o, SessionData &s) {
 }
 
 void readView(const Reader &r, const QJsonObject &o, SessionData &s) {
+    s.view.logPressure = o.value(QLatin1String("log_p")).toBool(true);
+    s.showAtmosphere = o.value(QLatin1String("show_1atm")).toBool(true);
+    if (!o.contains(QLatin1String("T_min_K"))) return;  // no view saved: the default applies
     s.view.T_min_K = r.number(o, "T_min_K", "/view");
     s.view.T_max_K = r.number(o, "T_max_K", "/view");
     s.view.P_min_Pa = r.number(o, "P_min_Pa", "/view");
     s.view.P_max_Pa = r.number(o, "P_max_Pa", "/view");
-    s.view.logPressure = o.value(QLatin1String("log_p")).toBool(true);
-    s.showAtmosphere = o.value(QLatin1String("show_1atm")).toBool(true);
     if (!s.view.valid()) r.fail("/view", "the view's ranges are empty or not positive");
 }
 
@@ -64,6 +65,17 @@ void readPoints(const Reader &r, const QJsonArray &a, SessionData &s) {
     }
 }
 
+// An unset view (the diagram never shown) is written with its flags only.
+QJsonObject viewJson(const SessionData &s) {
+    QJsonObject v{{"log_p", s.view.logPressure}, {"show_1atm", s.showAtmosphere}};
+    if (!s.view.valid()) return v;
+    v.insert(QStringLiteral("T_min_K"), s.view.T_min_K);
+    v.insert(QStringLiteral("T_max_K"), s.view.T_max_K);
+    v.insert(QStringLiteral("P_min_Pa"), s.view.P_min_Pa);
+    v.insert(QStringLiteral("P_max_Pa"), s.view.P_max_Pa);
+    return v;
+}
+
 }  // namespace
 
 QByteArray sessionToJson(const SessionData &s) {
@@ -78,12 +90,7 @@ QByteArray sessionToJson(const SessionData &s) {
                      {"substances", substances},
                      {"units", QJsonObject{{"T", unitText(s.units.temperature)},
                                            {"P", unitText(s.units.pressure)}}},
-                     {"view", QJsonObject{{"T_min_K", s.view.T_min_K},
-                                          {"T_max_K", s.view.T_max_K},
-                                          {"P_min_Pa", s.view.P_min_Pa},
-                                          {"P_max_Pa", s.view.P_max_Pa},
-                                          {"log_p", s.view.logPressure},
-                                          {"show_1atm", s.showAtmosphere}}},
+                     {"view", viewJson(s)},
                      {"points", points}};
     if (!s.recoveredFrom.isNull()) root.insert(QStringLiteral("recovered_from"), s.recoveredFrom);
     return QJsonDocument(root).toJson(QJsonDocument::Indented);

@@ -7,6 +7,7 @@
 //    "view": {"T_min_K": .., "T_max_K": .., "P_min_Pa": .., "P_max_Pa": .., "log_p": true,
 //             "show_1atm": true},
 //    "points": [{"label": "A", "T_K": 233.15, "P_Pa": 10.0}]}
+// The view's ranges are left out while no view was set (the default view then applies).
 // Recovery files add "recovered_from" (the session file being edited, or "").
 #include <QByteArray>
 #include <QString>

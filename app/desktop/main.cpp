@@ -69,6 +69,8 @@ int screenshot(pw::ui::MainWindow &window, const QStringList &files, bool demo,
     window.show();
     QTimer::singleShot(600, &window, [&window, out] {
         window.diagram()->rebuild();
+        const auto &points = window.document().points();
+        if (!points.empty()) window.showCursorState(points.back().T_K, points.back().P_Pa);
         const bool ok = window.grab().save(out);
         std::fprintf(ok ? stdout : stderr, "%s %s\n", ok ? "saved" : "cannot save",
                      qPrintable(out));

@@ -8,9 +8,13 @@
 #include <QSettings>
 #include <QTemporaryDir>
 #include <memory>
+#include <ostream>
 
 #include "core/library.h"
 #include "widgets/settings.h"
+
+// Readable QString values in GoogleTest failure messages.
+inline void PrintTo(const QString &s, std::ostream *os) { *os << '"' << s.toStdString() << '"'; }
 
 namespace pw::ui::test {
 

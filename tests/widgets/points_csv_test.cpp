@@ -23,8 +23,9 @@ TEST(PointsCsv, ExportHasTheCommandLineColumnsAndReimportsEqualPoints) {
     // is vapor, nearest the sublimation curve.
     EXPECT_TRUE(lines[1].startsWith(QStringLiteral("\"shelf, low\",-40,75.00")))
         << lines[1].toStdString();
-    EXPECT_TRUE(lines[1].contains(QStringLiteral(",vapor,,sublimation,")))
+    EXPECT_TRUE(lines[1].contains(QStringLiteral(",vapor,,sublimation (ice Ih),")))
         << lines[1].toStdString();
+    EXPECT_NEAR(lines[1].split(',').at(8).toDouble(), 10.0 - 12.84, 0.01);  // dP_Pa
     const std::vector<StatePoint> back = parsePointsCsv(csv, QStringLiteral("x.csv"));
     ASSERT_EQ(back.size(), 2u);
     EXPECT_EQ(back[0].label, points[0].label);

@@ -46,8 +46,6 @@ std::vector<SourceGroup> groupBySource(const Substance &s) {
     return groups;
 }
 
-}  // namespace
-
 QString shortCitation(const Citation &c) {
     const QStringList authors = authorList(q(c.authors));
     QString who;
@@ -59,11 +57,45 @@ QString shortCitation(const Citation &c) {
         who = surname(authors[0]) + QStringLiteral(" et al.");
     QString text = who;
     if (c.year > 0) text += QStringLiteral(" (%1)").arg(c.year);
-    const QString where = c.publication.empty() ? q(c.title) : q(c.publication);
+    // The publication up to its first ';' (later parts are adoption notes and the like).
+    QString where = c.publication.empty() ? q(c.title) : q(c.publication);
+    where = where.section(QLatin1Char(';'), 0, 0).trimmed();
     if (!where.isEmpty()) text += (text.isEmpty() ? QString() : QStringLiteral(", ")) + where;
-    if (!c.note.empty()) text += QStringLiteral(" (%1)").arg(q(c.note));
+    if (QString::fromStdString(c.note).contains(QLatin1String("from memory"), Qt::CaseInsensitive))
+        text += QStringLiteral(" (coefficients from memory)");
     return text.isEmpty() ? QStringLiteral("source not given") : text;
 }
+
+// "melting (ice Ih)", "melting (ice III)" -> "melting (ice Ih, III)".
+QString mergeLabels(const QStringList &labels) {
+    static const QRegularExpression re(QStringLiteral(R"(^(.*?) \((.*)\)$)"));
+    QStringList out;
+    QString prefix;
+    QStringList inner;
+    auto flush = [&] {
+        if (!prefix.isEmpty())
+            out << QStringLiteral("%1 (%2)").arg(prefix, inner.join(QStringLiteral(", ")));
+        prefix.clear();
+        inner.clear();
+    };
+    for (const QString &l : labels) {
+        const auto m = re.match(l);
+        if (!m.hasMatch()) {
+            flush();
+            out << l;
+            continue;
+        }
+        if (m.captured(1) != prefix) flush();
+        prefix = m.captured(1);
+        QString part = m.captured(2);
+        if (!inner.isEmpty() && part.startsWith(QLatin1String("ice "))) part = part.mid(4);
+        inner << part;
+    }
+    flush();
+    return out.join(QStringLiteral(", "));
+}
+
+}  // namespace
 
 QStringList sourceCaption(const DiagramScene &scene) {
     QStringList out;
@@ -73,7 +105,7 @@ QStringList sourceCaption(const DiagramScene &scene) {
         QStringList parts;
         for (const SourceGroup &g : groupBySource(s))
             parts << QStringLiteral("%1 [%2] — %3")
-                         .arg(g.boundaries.join(QStringLiteral(", ")),
+                         .arg(mergeLabels(g.boundaries),
                               g.forms.join(QStringLiteral(", ")), shortCitation(g.citation));
         QString head = q(s.name);
         if (!s.formula.empty()) head += QStringLiteral(" (%1)").arg(q(s.formula));

@@ -11,7 +11,7 @@ namespace {
 
 constexpr double kMmPerInch = 25.4;
 constexpr double kLogicalDpi = 96.0;
-constexpr double kDefaultAspect = 0.78;
+constexpr double kDefaultAspect = 0.85;
 
 [[noreturn]] void refuse(const QString &what) { throw Error(what.toStdString()); }
 
