@@ -167,8 +167,15 @@ std::shared_ptr<const PhaseDiagram> SubstanceLibrary::find(std::string_view rawK
     const std::string k = lower(key);
     for (const auto &d : diagrams_)
         if (d->substance().id == k) return d;
+    std::vector<std::shared_ptr<const PhaseDiagram>> found;
     for (const auto &d : diagrams_)
-        if (d->substance().matches(key)) return d;
+        if (d->substance().matches(key)) found.push_back(d);
+    if (found.size() == 1) return found.front();
+    if (found.size() > 1) {
+        std::string ids;
+        for (const auto &d : found) ids += (ids.empty() ? "" : ", ") + d->substance().id;
+        throw Error(fmt::format("'{}' matches several substances ({}); give the id", key, ids));
+    }
     throw Error(fmt::format("no substance matches '{}' (by id, alias, formula or name){}", key,
                             suggestions(diagrams_, key)));
 }

@@ -135,6 +135,26 @@ TEST(Library, BrokenFileGivenAsPathIsRefusedWithItsFindings) {
     }
 }
 
+// Formulas shared by isomers (diethyl ether and tert-butanol are both C4H10O) must not pick
+// one silently.
+TEST_F(UserFolder, AKeyMatchingSeveralSubstancesIsRefusedNamingThem) {
+    copy("testium.json", "t.json");
+    std::ifstream in(dataPath("test-units.json"));
+    std::string text((std::istreambuf_iterator<char>(in)), std::istreambuf_iterator<char>());
+    text.insert(text.find("\"sources\""), "\"formula\": \"Ts2\",\n  ");
+    std::ofstream(dir_ / "u.json") << text;
+    const auto lib = SubstanceLibrary::withUserFolder(dir_.string());
+    try {
+        lib.find("TS2");
+        FAIL() << "expected an error";
+    } catch (const Error &e) {
+        EXPECT_NE(std::string(e.what()).find("matches several substances (testium, test-units)"),
+                  std::string::npos)
+            << e.what();
+    }
+    EXPECT_EQ(lib.find("testium")->substance().id, "testium");  // the id stays unambiguous
+}
+
 TEST(Library, DefaultUserFolderFollowsXdgDataHome) {
     const char *old = std::getenv("XDG_DATA_HOME");
     const std::string saved = old ? old : "";
