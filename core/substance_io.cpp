@@ -104,7 +104,6 @@ std::string ValidationIssue::text() const {
     std::string s = file.empty() ? std::string("<input>") : file;
     s += ": ";
     if (!jsonPath.empty()) s += jsonPath + ": ";
-    if (severity == Severity::Warning) s += "warning: ";
     return s + message;
 }
 
