@@ -178,9 +178,10 @@ void addIsobar(const Ctx &c, double P_Pa, const QString &label, const QColor &co
     line->point2->setCoords(1.0, c.y(P_Pa));
     line->setPen(QPen(colour, 1.0 * c.style.scale, style));
     line->setSelectable(false);
-    addText(c, c.scene.view.T_min_K, P_Pa, label, Qt::AlignLeft | Qt::AlignBottom, c.font(0.85),
+    // Labelled at the right end, where the diagram is usually free (gas region).
+    addText(c, c.scene.view.T_max_K, P_Pa, label, Qt::AlignRight | Qt::AlignBottom, c.font(0.85),
             colour)
-        ->setPadding(QMargins(4, 0, 0, 1));
+        ->setPadding(QMargins(0, 0, 4, 1));
 }
 
 void addIsotherm(const Ctx &c, double T_K, const QString &label, const QColor &colour) {

@@ -438,12 +438,12 @@ void MainWindow::loadDemo() {
     }
     session_->newSession(water);
     settings_.setUnits({TemperatureUnit::Celsius, PressureUnit::Pa});
-    // Freeze-drying: frozen at atmospheric pressure, primary drying near 10 Pa, a shelf set
-    // point too warm for the chamber pressure, secondary drying (values: common practice).
+    // Freeze-drying: frozen at atmospheric pressure, primary drying near 10 Pa, a chamber
+    // pressure above the ice vapor pressure (no sublimation), secondary drying (common practice).
     doc_.resetPoints({{tr("frozen"), 228.15, 101325.0},
                       {tr("primary drying"), 238.15, 10.0},
-                      {tr("too warm"), 253.15, 150.0},
-                      {tr("secondary drying"), 303.15, 10.0}});
+                      {tr("chamber too high"), 243.15, 60.0},
+                      {tr("secondary drying"), 313.15, 3.0}});
     doc_.undoStack().setClean();
 }
 

@@ -46,26 +46,6 @@ std::vector<SourceGroup> groupBySource(const Substance &s) {
     return groups;
 }
 
-QString shortCitation(const Citation &c) {
-    const QStringList authors = authorList(q(c.authors));
-    QString who;
-    if (authors.size() == 1)
-        who = authors.front().trimmed();
-    else if (authors.size() == 2)
-        who = surname(authors[0]) + QStringLiteral(" & ") + surname(authors[1]);
-    else if (authors.size() > 2)
-        who = surname(authors[0]) + QStringLiteral(" et al.");
-    QString text = who;
-    if (c.year > 0) text += QStringLiteral(" (%1)").arg(c.year);
-    // The publication up to its first ';' (later parts are adoption notes and the like).
-    QString where = c.publication.empty() ? q(c.title) : q(c.publication);
-    where = where.section(QLatin1Char(';'), 0, 0).trimmed();
-    if (!where.isEmpty()) text += (text.isEmpty() ? QString() : QStringLiteral(", ")) + where;
-    if (QString::fromStdString(c.note).contains(QLatin1String("from memory"), Qt::CaseInsensitive))
-        text += QStringLiteral(" (coefficients from memory)");
-    return text.isEmpty() ? QStringLiteral("source not given") : text;
-}
-
 // "melting (ice Ih)", "melting (ice III)" -> "melting (ice Ih, III)".
 QString mergeLabels(const QStringList &labels) {
     static const QRegularExpression re(QStringLiteral(R"(^(.*?) \((.*)\)$)"));
@@ -96,6 +76,26 @@ QString mergeLabels(const QStringList &labels) {
 }
 
 }  // namespace
+
+QString shortCitation(const Citation &c) {
+    const QStringList authors = authorList(q(c.authors));
+    QString who;
+    if (authors.size() == 1)
+        who = authors.front().trimmed();
+    else if (authors.size() == 2)
+        who = surname(authors[0]) + QStringLiteral(" & ") + surname(authors[1]);
+    else if (authors.size() > 2)
+        who = surname(authors[0]) + QStringLiteral(" et al.");
+    QString text = who;
+    if (c.year > 0) text += QStringLiteral(" (%1)").arg(c.year);
+    // The publication up to its first ';' (later parts are adoption notes and the like).
+    QString where = c.publication.empty() ? q(c.title) : q(c.publication);
+    where = where.section(QLatin1Char(';'), 0, 0).trimmed();
+    if (!where.isEmpty()) text += (text.isEmpty() ? QString() : QStringLiteral(", ")) + where;
+    if (QString::fromStdString(c.note).contains(QLatin1String("from memory"), Qt::CaseInsensitive))
+        text += QStringLiteral(" (coefficients from memory)");
+    return text.isEmpty() ? QStringLiteral("source not given") : text;
+}
 
 QStringList sourceCaption(const DiagramScene &scene) {
     QStringList out;
