@@ -108,13 +108,18 @@ StateColumns resolveStateColumns(const std::vector<std::string> &header,
         return b.empty() || !options.pUnit ||
                parsePressureUnit(b) == parsePressureUnit(*options.pUnit);
     };
+    // A unit error names the column it belongs to (the header cell).
     try {
         const std::string tu = unitFor(tHead, options.tUnit, "--t-unit", fileName, sameT());
-        const std::string pu = unitFor(pHead, options.pUnit, "--p-unit", fileName, sameP());
         if (!tu.empty()) c.tUnit = parseTemperatureUnit(tu);
+    } catch (const UnitError &e) {
+        throw InputError(fileName, 1, tHead, e.what());
+    }
+    try {
+        const std::string pu = unitFor(pHead, options.pUnit, "--p-unit", fileName, sameP());
         if (!pu.empty()) c.pUnit = parsePressureUnit(pu);
     } catch (const UnitError &e) {
-        throw InputError(fileName, 1, "", e.what());
+        throw InputError(fileName, 1, pHead, e.what());
     }
     if (options.wantTime) {
         c.time = findColumn(header, options.timeColumn, {"time", "timestamp", "datetime", "date"},

@@ -26,6 +26,13 @@ std::string_view delimiterName(char d) {
     return d == ',' ? "comma" : d == ';' ? "semicolon" : d == '\t' ? "tab" : "separator";
 }
 
+// A cell as quoted in a message: long cells (a runaway line) are cut to their first bytes.
+std::string shown(std::string_view cell) {
+    constexpr std::size_t kMax = 40;
+    if (cell.size() <= kMax) return std::string(cell);
+    return fmt::format("{}... ({} bytes)", cell.substr(0, kMax), cell.size());
+}
+
 }  // namespace
 
 std::optional<std::string> parseNumber(std::string_view cell, bool decimalComma, double &out) {
@@ -39,24 +46,24 @@ std::optional<std::string> parseNumber(std::string_view cell, bool decimalComma,
             return fmt::format(
                 "'{}' contains '.' but the file was declared to use a decimal "
                 "comma (thousands separators are not accepted)",
-                s);
-        if (digits.size() >= local.size()) return fmt::format("'{}' is not a number", s);
+                shown(s));
+        if (digits.size() >= local.size()) return fmt::format("'{}' is not a number", shown(s));
         std::copy(digits.begin(), digits.end(), local.begin());
         std::replace(local.begin(), local.begin() + digits.size(), ',', '.');
         digits = std::string_view(local.data(), digits.size());
     }
     double v = 0.0;
     const auto [ptr, ec] = std::from_chars(digits.data(), digits.data() + digits.size(), v);
-    if (ec == std::errc::result_out_of_range) return fmt::format("'{}' is out of range", s);
+    if (ec == std::errc::result_out_of_range) return fmt::format("'{}' is out of range", shown(s));
     if (ec != std::errc() || ptr != digits.data() + digits.size()) {
         if (!decimalComma && s.find(',') != std::string_view::npos)
             return fmt::format(
                 "'{}' is not a number (if the file uses a decimal comma, declare "
                 "it: --decimal-comma)",
-                s);
-        return fmt::format("'{}' is not a number", s);
+                shown(s));
+        return fmt::format("'{}' is not a number", shown(s));
     }
-    if (!std::isfinite(v)) return fmt::format("'{}' is not a finite number", s);
+    if (!std::isfinite(v)) return fmt::format("'{}' is not a finite number", shown(s));
     out = v;
     return std::nullopt;
 }
