@@ -184,7 +184,7 @@ void addPlotCommand(CLI::App &app, Io &io) {
     cmd->add_option("--output", a->output, "figure file: .png, .svg or .pdf")->required();
     cmd->add_option("--width-mm", a->widthMm, "physical width in mm (85: one column, 170: two)")
         ->capture_default_str();
-    cmd->add_option("--height-mm", a->heightMm, "physical height in mm (default 0.78 x width)");
+    cmd->add_option("--height-mm", a->heightMm, "physical height in mm (default 0.85 x width)");
     cmd->add_option("--dpi", a->dpi, "PNG resolution in dots per inch")->capture_default_str();
     auto *wpx = cmd->add_option("--width-px", a->widthPx, "PNG width in pixels (with --height-px)");
     auto *hpx = cmd->add_option("--height-px", a->heightPx, "PNG height in pixels");

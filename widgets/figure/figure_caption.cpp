@@ -105,8 +105,8 @@ QStringList sourceCaption(const DiagramScene &scene) {
         QStringList parts;
         for (const SourceGroup &g : groupBySource(s))
             parts << QStringLiteral("%1 [%2] — %3")
-                         .arg(mergeLabels(g.boundaries),
-                              g.forms.join(QStringLiteral(", ")), shortCitation(g.citation));
+                         .arg(mergeLabels(g.boundaries), g.forms.join(QStringLiteral(", ")),
+                              shortCitation(g.citation));
         QString head = q(s.name);
         if (!s.formula.empty()) head += QStringLiteral(" (%1)").arg(q(s.formula));
         out << head + QStringLiteral(": ") + parts.join(QStringLiteral("; "));
