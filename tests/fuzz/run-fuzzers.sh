@@ -28,9 +28,10 @@ gui_flag=-DPW_BUILD_GUI=OFF
 launcher=()
 command -v ccache >/dev/null && launcher=(-DCMAKE_CXX_COMPILER_LAUNCHER=ccache)
 say "configuring $build (clang, PW_FUZZ=ON, $gui_flag)"
+# The same settings as tests/sanitize/run.sh, which shares this folder (one core build).
 cmake -S . -B "$build" -G Ninja "${launcher[@]}" -DCMAKE_CXX_COMPILER=clang++ \
-    -DCMAKE_BUILD_TYPE=RelWithDebInfo -DPW_FUZZ=ON "$gui_flag" -DPW_BUILD_BENCHMARKS=OFF \
-    >/dev/null
+    -DCMAKE_BUILD_TYPE=RelWithDebInfo -DPW_FUZZ=ON "$gui_flag" \
+    -DPW_BUILD_BENCHMARKS=OFF >/dev/null
 cmake --build "$build" -j "${PW_JOBS:-2}" --target "${targets[@]/%/_fuzz}"
 
 status=0
