@@ -33,6 +33,7 @@ struct PlotArgs {
     std::string tUnit = "K", pUnit = "Pa";
     std::vector<double> tRange, pRange;
     bool noCaption = false, noLegend = false, caution = false, noAtmosphere = false;
+    bool noRegions = false;
 };
 
 // A QApplication for the command when none exists (the CLI never shows a window: without a
@@ -155,6 +156,7 @@ void plot(const PlotArgs &a, Io &io) {
         scene.substances.push_back(loadSubstance(key, io.err));
     scene.units = {parseTemperatureUnit(a.tUnit), parsePressureUnit(a.pUnit)};
     scene.showAtmosphere = !a.noAtmosphere;
+    scene.fillRegions = scene.labelRegions = !a.noRegions;
     if (!a.points.empty()) scene.points = readPoints(a.points, io.in);
     for (const std::string &g : a.guides) scene.guides.push_back(parseGuide(g));
     scene.view = viewFor(a, scene);
@@ -184,7 +186,8 @@ void addPlotCommand(CLI::App &app, Io &io) {
     cmd->add_option("--output", a->output, "figure file: .png, .svg or .pdf")->required();
     cmd->add_option("--width-mm", a->widthMm, "physical width in mm (85: one column, 170: two)")
         ->capture_default_str();
-    cmd->add_option("--height-mm", a->heightMm, "physical height in mm (default 0.85 x width)");
+    cmd->add_option("--height-mm", a->heightMm,
+                    "physical height in mm (default: 0.68 x width for the plot, plus the caption)");
     cmd->add_option("--dpi", a->dpi, "PNG resolution in dots per inch")->capture_default_str();
     auto *wpx = cmd->add_option("--width-px", a->widthPx, "PNG width in pixels (with --height-px)");
     auto *hpx = cmd->add_option("--height-px", a->heightPx, "PNG height in pixels");
@@ -201,6 +204,8 @@ void addPlotCommand(CLI::App &app, Io &io) {
                   "add the caution line for high-pressure, cryogenic and vacuum work");
     cmd->add_flag("--no-caption", a->noCaption, "leave out the sources/version caption");
     cmd->add_flag("--no-legend", a->noLegend, "leave out the legend");
+    cmd->add_flag("--no-regions", a->noRegions,
+                  "leave out the region fills and labels (e.g. for overlays)");
     cmd->add_flag("--no-atmosphere", a->noAtmosphere, "leave out the 1 atm line");
     cmd->callback([a, &io] {
         if (a->substances.size() > 4) throw CLI::ValidationError("--substance", "at most 4");

@@ -100,15 +100,17 @@ void requireSubstance(const DiagramScene &scene) {
 
 }  // namespace
 
-QImage renderFigureImage(const DiagramScene &scene, const FigureSpec &spec) {
+QImage renderFigureImage(const DiagramScene &scene, const FigureSpec &given) {
     requireSubstance(scene);
+    const FigureSpec spec = resolveFigureHeight(scene, given);
     QCustomPlot plot;
     buildFigure(plot, scene, spec);
     return paintImage(plot, spec);
 }
 
-QByteArray renderFigureBytes(const DiagramScene &scene, const FigureSpec &spec) {
+QByteArray renderFigureBytes(const DiagramScene &scene, const FigureSpec &given) {
     requireSubstance(scene);
+    const FigureSpec spec = resolveFigureHeight(scene, given);
     QCustomPlot plot;
     buildFigure(plot, scene, spec);
     switch (spec.format) {

@@ -96,6 +96,47 @@ SceneStyle figureStyle(const FigureSpec &spec) {
     return style;
 }
 
+namespace {
+
+QFont captionFont(const SceneStyle &style) {
+    QFont small = style.font;
+    small.setPointSizeF(style.font.pointSizeF() * style.scale * 0.82);
+    return small;
+}
+
+QString captionText(const DiagramScene &shown, const FigureSpec &spec, const QFont &font,
+                    double width) {
+    QStringList lines = sourceCaption(shown);
+    lines << versionLine(spec.date);
+    QStringList wrapped;
+    for (const QString &l : lines) wrapped << wrapText(l, font, width);
+    return wrapped.join(QLatin1Char('\n'));
+}
+
+}  // namespace
+
+FigureSpec resolveFigureHeight(const DiagramScene &scene, const FigureSpec &spec) {
+    if (spec.heightMm > 0 || (spec.widthPx > 0 && spec.heightPx > 0)) return spec;
+    constexpr double kMmPerPt = 25.4 / 72.0;
+    const SceneStyle style = figureStyle(spec);
+    const QFont small = captionFont(style);
+    const double widthPx = figureSizeMm(spec).width() / 25.4 * 96.0 - 2.0 * kMarginPx - 2.0;
+    int lines = 0;
+    if (spec.caption)
+        lines += static_cast<int>(
+            captionText(figureScene(scene, spec), spec, small, widthPx).count(QLatin1Char('\n')) +
+            1);
+    if (spec.caution)
+        lines +=
+            static_cast<int>(wrapText(cautionLine(), small, widthPx).count(QLatin1Char('\n')) + 1);
+    double extraMm = lines * small.pointSizeF() * 1.22 * kMmPerPt + 2.0;
+    if (spec.legend && scene.substances.size() > 1) extraMm += 1.8 * small.pointSizeF() * kMmPerPt;
+    if (!spec.title.isEmpty()) extraMm += 2.0 * style.font.pointSizeF() * style.scale * kMmPerPt;
+    FigureSpec out = spec;
+    out.heightMm = spec.widthMm * 0.68 + extraMm;
+    return out;
+}
+
 void buildFigure(QCustomPlot &plot, const DiagramScene &scene, const FigureSpec &spec) {
     const QSize logical = figureLogicalSize(spec);
     plot.resize(logical);
@@ -110,16 +151,9 @@ void buildFigure(QCustomPlot &plot, const DiagramScene &scene, const FigureSpec 
     else
         plot.legend->setVisible(false);
 
-    QFont small = style.font;
-    small.setPointSizeF(style.font.pointSizeF() * style.scale * 0.82);
+    const QFont small = captionFont(style);
     const double width = logical.width() - 2.0 * kMarginPx - 2.0;
-    if (spec.caption) {
-        QStringList lines = sourceCaption(shown);
-        lines << versionLine(spec.date);
-        QStringList wrapped;
-        for (const QString &l : lines) wrapped << wrapText(l, small, width);
-        addRow(plot, wrapped.join(QLatin1Char('\n')), small, style.text);
-    }
+    if (spec.caption) addRow(plot, captionText(shown, spec, small, width), small, style.text);
     if (spec.caution) {
         QFont italic = small;
         italic.setItalic(true);

@@ -13,6 +13,10 @@ namespace pw::ui {
 // ("P1 · liquid") when spec.pointPhases.
 DiagramScene figureScene(const DiagramScene &scene, const FigureSpec &spec);
 
+// With heightMm <= 0 (and no pixel size): the height that gives the plot 0.68 x the width
+// plus room for the title, legend, caption and caution rows at the spec's font size.
+FigureSpec resolveFigureHeight(const DiagramScene &scene, const FigureSpec &spec);
+
 // Light style with fonts and line widths for the spec's physical size.
 SceneStyle figureStyle(const FigureSpec &spec);
 

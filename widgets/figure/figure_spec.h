@@ -17,7 +17,7 @@ enum class FigureFormat { Png, Svg, Pdf };
 struct FigureSpec {
     FigureFormat format = FigureFormat::Png;
     // Physical size: width in mm (85 single column, 170 double column) and DPI (PNG only).
-    // heightMm <= 0: width * 0.85.
+    // heightMm <= 0: automatic (figure_render.h resolveFigureHeight; width * 0.85 here).
     double widthMm = 85.0;
     double heightMm = 0.0;
     int dpi = 300;

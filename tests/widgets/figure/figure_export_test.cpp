@@ -60,15 +60,22 @@ bool anyContains(const QStringList &texts, const QString &needle) {
 
 TEST_F(FigureExport, PngHasExactlyTheRequestedPixelSize) {
     FigureSpec s = spec(FigureFormat::Png);
-    // 85 mm at 300 dpi: 85 / 25.4 * 300 = 1003.9 -> 1004 px wide; height 0.85 x width =
-    // 72.25 mm -> 853.3 -> 853 px.
+    // 85 mm x 60 mm at 300 dpi: 85 / 25.4 * 300 = 1003.9 -> 1004 px; 60 / 25.4 * 300 =
+    // 708.7 -> 709 px.
+    s.heightMm = 60.0;
     const QString file = path("fig.png");
     exportFigure(waterScene(), s, file);
     QImage png(file);
     ASSERT_FALSE(png.isNull());
     EXPECT_EQ(png.width(), 1004);
-    EXPECT_EQ(png.height(), 853);
+    EXPECT_EQ(png.height(), 709);
     EXPECT_NEAR(png.dotsPerMeterX() * 0.0254, 300.0, 0.5);
+    // Automatic height: the plot keeps 0.68 x the width, the caption rows come on top.
+    s.heightMm = 0.0;
+    exportFigure(waterScene(), s, file);
+    png = QImage(file);
+    EXPECT_EQ(png.width(), 1004);
+    EXPECT_GT(png.height(), 683);
     // 170 mm at 600 dpi: 4015.7 -> 4016 px.
     s.widthMm = 170.0;
     s.dpi = 600;
