@@ -43,7 +43,9 @@ State stateAtTime(const std::vector<State> &states, double time_s) {
 
 RunImportJob::RunImportJob(std::shared_ptr<const PhaseDiagram> diagram, QString path,
                            run::RunLogOptions options, QObject *parent)
-    : QObject(parent), diagram_(std::move(diagram)), path_(std::move(path)),
+    : QObject(parent),
+      diagram_(std::move(diagram)),
+      path_(std::move(path)),
       options_(std::move(options)) {
     qRegisterMetaType<pw::ui::RunPtr>();
 }

@@ -16,11 +16,11 @@
 namespace pw::ui {
 
 struct LoadedRun {
-    QString title;                     // shown in the run list
-    QString source;                    // file path, "demo:<id>" or "plan"
-    std::vector<State> states;         // every sample, K / Pa / s
-    run::RunAnalysis analysis;         // on every state
-    std::optional<run::RuleSet> rules;  // what the verdicts were checked against
+    QString title;                          // shown in the run list
+    QString source;                         // file path, "demo:<id>" or "plan"
+    std::vector<State> states;              // every sample, K / Pa / s
+    run::RunAnalysis analysis;              // on every state
+    std::optional<run::RuleSet> rules;      // what the verdicts were checked against
     std::vector<std::size_t> drawIndices;   // downsampled, for drawing only
     std::vector<run::MarginPoint> margins;  // at drawIndices, for the time chart
 };

@@ -130,9 +130,8 @@ void RunOverlay::drawMarks() {
     for (const PathEvent &e : run_->analysis.path.events) {
         events->addData(plotX(e.T_K, u), plotY(e.P_Pa, u));
         label(plot, plotX(e.T_K, u), plotY(e.P_Pa, u),
-              QStringLiteral("%1 · %2")
-                  .arg(QString::fromStdString(std::string(toString(e.transition))),
-                       hoursText(e.time_s)),
+              QStringLiteral("%1 · %2").arg(
+                  QString::fromStdString(std::string(toString(e.transition))), hoursText(e.time_s)),
               eventColour, Qt::AlignLeft | Qt::AlignVCenter);
     }
     markerGraph_ = scatterGraph(plot, QCPScatterStyle::ssCrossCircle, QColor(0x55, 0x22, 0x88),
