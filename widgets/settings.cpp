@@ -18,6 +18,7 @@ constexpr auto kGeometry = "window/geometry";
 constexpr auto kState = "window/state";
 constexpr auto kCaution = "firstRun/cautionShown";
 constexpr auto kAutosave = "session/autosaveSeconds";
+constexpr auto kFigure = "figure/";  // + format, widthMm, heightMm, dpi, legend, caption...
 
 template <typename Unit, typename Parse>
 Unit readUnit(const QSettings &store, const char *key, Unit fallback, Parse parse) {
@@ -108,6 +109,41 @@ void Settings::setAutosaveSeconds(int seconds) {
 QString Settings::lastDirectory() const { return store_.value(QLatin1String(kLastDir)).toString(); }
 void Settings::setLastDirectory(const QString &dir) {
     store_.setValue(QLatin1String(kLastDir), dir);
+}
+
+FigureSpec Settings::figureSpec() const {
+    const FigureSpec d;
+    auto value = [this](const char *name, const QVariant &fallback) {
+        return store_.value(QLatin1String(kFigure) + QLatin1String(name), fallback);
+    };
+    FigureSpec s;
+    const int format = value("format", static_cast<int>(d.format)).toInt();
+    s.format = format >= 0 && format <= 2 ? static_cast<FigureFormat>(format) : d.format;
+    s.widthMm = value("widthMm", d.widthMm).toDouble();
+    s.heightMm = value("heightMm", d.heightMm).toDouble();
+    s.dpi = value("dpi", d.dpi).toInt();
+    s.legend = value("legend", d.legend).toBool();
+    s.caption = value("caption", d.caption).toBool();
+    s.caution = value("caution", d.caution).toBool();
+    s.pointPhases = value("pointPhases", d.pointPhases).toBool();
+    if (!(s.widthMm >= 10 && s.widthMm <= 1000)) s.widthMm = d.widthMm;  // stale or hand-edited
+    if (s.dpi < 50 || s.dpi > 2400) s.dpi = d.dpi;
+    if (s.heightMm < 0) s.heightMm = 0;
+    return s;
+}
+
+void Settings::setFigureSpec(const FigureSpec &s) {
+    auto set = [this](const char *name, const QVariant &v) {
+        store_.setValue(QLatin1String(kFigure) + QLatin1String(name), v);
+    };
+    set("format", static_cast<int>(s.format));
+    set("widthMm", s.widthMm);
+    set("heightMm", s.heightMm);
+    set("dpi", s.dpi);
+    set("legend", s.legend);
+    set("caption", s.caption);
+    set("caution", s.caution);
+    set("pointPhases", s.pointPhases);
 }
 
 }  // namespace pw::ui

@@ -8,6 +8,7 @@
 #include <QStringList>
 
 #include "core/units.h"
+#include "widgets/figure/figure_spec.h"
 
 namespace pw::ui {
 
@@ -47,6 +48,10 @@ public:
     void setAutosaveSeconds(int seconds);
     QString lastDirectory() const;
     void setLastDirectory(const QString &dir);
+    // Figure export options remembered between uses (widgets/figure/export_dialog.h); the
+    // title and date are not kept.
+    FigureSpec figureSpec() const;
+    void setFigureSpec(const FigureSpec &spec);
 
 signals:
     void unitsChanged(pw::ui::DisplayUnits units);
