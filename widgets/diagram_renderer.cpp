@@ -231,6 +231,7 @@ void addPaths(const Ctx &c) {
         curve->setPen(QPen(colour, 1.6 * c.style.scale));
         curve->setName(path.label);
         curve->setSelectable(QCP::stNone);
+        curve->setAntialiased(xs.size() < 5000);  // long logs: speed over smooth edges
         if (path.label.isEmpty()) curve->removeFromLegend();
     }
 }
@@ -322,6 +323,7 @@ void applyView(QCustomPlot &plot, const ViewState &view, const DisplayUnits &uni
 void renderScene(QCustomPlot &plot, const DiagramScene &scene, const SceneStyle &style) {
     plot.clearItems();
     plot.clearPlottables();
+    plot.setPlottingHint(QCP::phFastPolylines, true);
     const Ctx c{plot, scene, style};
     setTitle(plot, scene.title, c);
     setupAxes(c);
@@ -350,11 +352,12 @@ void renderScene(QCustomPlot &plot, const DiagramScene &scene, const SceneStyle 
 }
 
 std::vector<State> decimateForDisplay(const std::vector<State> &states, const ViewState &view) {
+    constexpr double kCells = 1200.0;  // about one screen pixel per cell
     if (states.size() < 4096) return states;
     const bool logP = view.logPressure && view.P_min_Pa > 0;
-    const double sx = 2000.0 / std::max(1e-12, view.T_max_K - view.T_min_K);
-    const double sy = logP ? 2000.0 / std::max(1e-12, std::log(view.P_max_Pa / view.P_min_Pa))
-                           : 2000.0 / std::max(1e-12, view.P_max_Pa - view.P_min_Pa);
+    const double sx = kCells / std::max(1e-12, view.T_max_K - view.T_min_K);
+    const double sy = logP ? kCells / std::max(1e-12, std::log(view.P_max_Pa / view.P_min_Pa))
+                           : kCells / std::max(1e-12, view.P_max_Pa - view.P_min_Pa);
     std::vector<State> out;
     out.reserve(8192);
     auto key = [&](const State &s) {

@@ -41,7 +41,7 @@ void renderScene(QCustomPlot &plot, const DiagramScene &scene, const SceneStyle 
 // Apply only the axis ranges and scale of `view` (cheap; used while panning).
 void applyView(QCustomPlot &plot, const ViewState &view, const DisplayUnits &units);
 
-// Reduce a long path for drawing: keep a state only when it moves at least 1/2000 of the
+// Reduce a long path for drawing: keep a state only when it moves at least 1/1200 of the
 // view in either direction from the last kept one (never used for computation).
 std::vector<State> decimateForDisplay(const std::vector<State> &states, const ViewState &view);
 
