@@ -42,6 +42,18 @@ QCPItemText *addText(const Ctx &c, double T_K, double P_Pa, const QString &text,
     return t;
 }
 
+// A label anchored in the right quarter of the view is placed left of its anchor, so it is
+// not cut off by the plot edge.
+void keepInView(const Ctx &c, QCPItemText *t, double T_K) {
+    const ViewState &v = c.scene.view;
+    if (T_K < v.T_min_K + 0.72 * (v.T_max_K - v.T_min_K)) return;
+    const Qt::Alignment vertical = t->positionAlignment() & Qt::AlignVertical_Mask;
+    t->setPositionAlignment(Qt::AlignRight | vertical);
+    t->setTextAlignment(Qt::AlignRight);
+    const QMargins m = t->padding();
+    t->setPadding(QMargins(m.right(), m.top(), m.left(), m.bottom()));
+}
+
 QCPGraph *addMarkers(const Ctx &c, const QVector<double> &xs, const QVector<double> &ys,
                      QCPScatterStyle::ScatterShape shape, const QColor &edge, const QColor &fill,
                      double size) {
@@ -114,6 +126,19 @@ void addRegions(const Ctx &c, const PhaseDiagram &d) {
         addText(c, l.T_K, l.P_Pa, l.name, Qt::AlignCenter, c.font(1.15, false, true), colour);
 }
 
+// Overlays (figures) must stay apart in greyscale print: each substance after the first has
+// its own dash pattern and marker along its curves.
+void styleOverlay(const Ctx &c, QCPCurve *curve, QPen &pen, int index, int pointCount) {
+    static const Qt::PenStyle dashes[] = {Qt::DashDotLine, Qt::DotLine, Qt::DashDotDotLine};
+    static const QCPScatterStyle::ScatterShape shapes[] = {
+        QCPScatterStyle::ssSquare, QCPScatterStyle::ssTriangle, QCPScatterStyle::ssCross};
+    const int i = std::clamp(index - 1, 0, 2);
+    pen.setStyle(dashes[i]);
+    curve->setScatterStyle(QCPScatterStyle(shapes[i], QPen(pen.color(), 1.2 * c.style.scale),
+                                           QBrush(c.style.background), 6 * c.style.scale));
+    curve->setScatterSkip(std::max(0, pointCount / 8 - 1));
+}
+
 void addBoundaries(const Ctx &c, const PhaseDiagram &d, int index) {
     const QColor colour = substanceColour(index, c.style.dark);
     bool legendDone = false;
@@ -129,7 +154,7 @@ void addBoundaries(const Ctx &c, const PhaseDiagram &d, int index) {
         curve->setData(xs, ys);
         QPen pen(colour, (run.extrapolated ? 1.4 : 2.0) * c.style.scale,
                  run.extrapolated ? Qt::DashLine : Qt::SolidLine);
-        if (index > 0 && !run.extrapolated) pen.setStyle(Qt::DashDotLine);
+        if (index > 0 && !run.extrapolated) styleOverlay(c, curve, pen, index, xs.size());
         curve->setPen(pen);
         curve->setSelectable(QCP::stNone);
         curve->setName(QString::fromStdString(d.substance().name));
@@ -190,9 +215,12 @@ void addIsotherm(const Ctx &c, double T_K, const QString &label, const QColor &c
     line->point2->setCoords(c.x(T_K), 1.0);
     line->setPen(QPen(colour, 1.0 * c.style.scale, Qt::DashDotLine));
     line->setSelectable(false);
-    auto *t = addText(c, T_K, c.scene.view.P_max_Pa, label, Qt::AlignLeft | Qt::AlignTop,
+    // Written along the line (reading upwards from the bottom edge, left of it), so it is
+    // never cut off at the right edge and stays clear of the region labels near the top.
+    auto *t = addText(c, T_K, c.scene.view.P_min_Pa, label, Qt::AlignLeft | Qt::AlignBottom,
                       c.font(0.85), colour);
-    t->setPadding(QMargins(4, 2, 0, 0));
+    t->setRotation(-90);
+    t->setPadding(QMargins(4, 0, 0, 2));
 }
 
 void addAtmosphere(const Ctx &c, const PhaseDiagram &d) {
@@ -272,6 +300,16 @@ void setTitle(QCustomPlot &plot, const QString &title, const Ctx &c) {
     existing->setTextColor(c.style.text);
 }
 
+// Left-aligned labels anchored in the right quarter of the view flip to the left of their
+// anchor so the plot edge does not cut them off (fixed points, points, isotherms).
+void keepLabelsInView(const Ctx &c) {
+    for (int i = 0; i < c.plot.itemCount(); ++i) {
+        auto *t = qobject_cast<QCPItemText *>(c.plot.item(i));
+        if (t && t->rotation() == 0 && (t->positionAlignment() & Qt::AlignLeft))
+            keepInView(c, t, kelvinFromPlot(t->position->coords().x(), c.scene.units));
+    }
+}
+
 }  // namespace
 
 SceneStyle SceneStyle::fromPalette(const QPalette &palette, const QFont &font) {
@@ -345,6 +383,7 @@ void renderScene(QCustomPlot &plot, const DiagramScene &scene, const SceneStyle 
     }
     addPaths(c);
     addPoints(c);
+    keepLabelsInView(c);
     plot.legend->setVisible(scene.substances.size() > 1);
     plot.legend->setBrush(QBrush(style.background));
     plot.legend->setTextColor(style.text);

@@ -9,15 +9,15 @@ cd "$here"
 # Water in the freeze-drying window: chamber set point 13.33 Pa (100 mTorr), a collapse
 # temperature of -35 degC, product and secondary-drying points from freeze-drying-points.csv.
 "$cli" plot --substance water --points freeze-drying-points.csv \
-    --guide "P=100 mTorr: chamber set point" --guide "T=-35 degC: collapse" \
+    --guide "P=100 mTorr: chamber" --guide "T=-35 degC: collapse" \
     --title "Water: freeze-drying window" --t-unit degC --t-range -60 40 --p-range 1 10000 \
     --caution --width-mm 85 --dpi 300 --output water-freeze-drying.png
 "$cli" plot --substance water --points freeze-drying-points.csv \
-    --guide "P=100 mTorr: chamber set point" --guide "T=-35 degC: collapse" \
+    --guide "P=100 mTorr: chamber" --guide "T=-35 degC: collapse" \
     --title "Water: freeze-drying window" --t-unit degC --t-range -60 40 --p-range 1 10000 \
     --caution --width-mm 85 --output water-freeze-drying.pdf
 "$cli" plot --substance water --points freeze-drying-points.csv \
-    --guide "P=100 mTorr: chamber set point" --guide "T=-35 degC: collapse" \
+    --guide "P=100 mTorr: chamber" --guide "T=-35 degC: collapse" \
     --title "Water: freeze-drying window" --t-unit degC --t-range -60 40 --p-range 1 10000 \
     --caution --width-mm 85 --output water-freeze-drying.svg
 
