@@ -17,6 +17,7 @@ void addCommands(CLI::App &app, Io &io) {
     addBoundaryCommand(app, io);
     addPathCommand(app, io);
     addFitCommand(app, io);
+    addCompareCommand(app, io);
 #ifdef PW_HAVE_GUI
     addPlotCommand(app, io);
 #endif

@@ -7,25 +7,12 @@
 #include <ostream>
 
 #include "app/cli/cli.h"
+#include "app/cli/report_parts.h"
 #include "app/cli/substance_arg.h"
 #include "core/units.h"
 
 namespace pw::cli {
 namespace {
-
-using Json = nlohmann::ordered_json;
-
-// Every result supports engineering judgement (FIELD-NOTES, "Cautions the tool must carry").
-constexpr const char *kGeneralCaution =
-    "Results support engineering judgement; they do not replace the applicable "
-    "pressure-equipment codes, site procedures or licensed practice.";
-
-Json optionalNumber(const std::optional<double> &x) { return x ? Json(*x) : Json(nullptr); }
-
-Json pointJson(const FixedPoint *fp) {
-    if (fp == nullptr) return nullptr;
-    return Json{{"T_K", fp->T_K}, {"P_Pa", fp->P_Pa}};
-}
 
 Json boundaryJson(const Boundary &b) {
     Json j{{"kind", std::string(toString(b.kind))},
