@@ -87,6 +87,8 @@ DiagramScene CompareView::overlayScene() const {
     s.fillRegions = false;
     s.labelRegions = false;
     s.showAtmosphere = true;
+    // Two sets of labels would sit on top of each other: the table carries the numbers.
+    s.labelFixedPoints = false;
     if (a_ && b_)
         s.title = tr("%1 and %2")
                       .arg(QString::fromStdString(a_->substance().name),

@@ -4,6 +4,7 @@
 #include <algorithm>
 #include <cmath>
 
+#include "core/compare.h"
 #include "widgets/boundary_sampling.h"
 #include "widgets/compare/compare_view.h"
 #include "widgets/diagram_scene.h"
@@ -71,8 +72,23 @@ void addSubstance(QCustomPlot &plot, const PhaseDiagram &d, int index, bool logP
                   const SceneStyle &s) {
     const FixedPoint *cp = d.criticalPoint();
     if (!cp) return;
-    bool legendDone = false;
+    // The vaporization curve from the core, which ends exactly at (1, 1); the legend entry.
+    const std::vector<ReducedPoint> vap = reducedVaporizationCurve(d, 400);
+    QVector<double> vx, vy;
+    for (const ReducedPoint &p : vap) {
+        vx.push_back(p.Tr);
+        vy.push_back(p.Pr);
+    }
+    auto *vapCurve = new QCPCurve(plot.xAxis, plot.yAxis);
+    vapCurve->setData(vx, vy);
+    vapCurve->setPen(reducedPen(index, false, s));
+    vapCurve->setName(QString::fromStdString(d.substance().name));
+    bool legendDone = !vap.empty();
+    if (!legendDone) vapCurve->removeFromLegend();
     for (const CurveRun &run : sampleBoundaries(d, defaultView(d, logPressure))) {
+        if (run.boundary && run.boundary->kind == BoundaryKind::Vaporization && !vap.empty() &&
+            !run.extrapolated)
+            continue;
         QVector<double> xs, ys;
         for (std::size_t i = 0; i < run.T_K.size(); ++i) {
             xs.push_back(run.T_K[i] / cp->T_K);
