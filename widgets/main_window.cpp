@@ -20,6 +20,7 @@
 #include "core/substance_io.h"
 #include "widgets/caution.h"
 #include "widgets/commands.h"
+#include "widgets/compare/compare_controller.h"
 #include "widgets/diagram_widget.h"
 #include "widgets/format.h"
 #include "widgets/points_csv.h"
@@ -59,6 +60,8 @@ MainWindow::MainWindow(Settings &settings, SubstanceLibrary &library, const QStr
     setCentralWidget(diagram_);
     setAcceptDrops(true);
     buildDocks();
+    compare_ = new CompareController(*this, doc_, settings_, library_, points_->view(),
+                                     PointsModel::PhaseCol);
     buildMenus();
     buildToolBar();
     connectActions();
@@ -128,6 +131,7 @@ void MainWindow::buildMenus() {
     edit->addActions({actions_.copyDiagram, actions_.findSubstance});
     QMenu *view = menuBar()->addMenu(tr("&View"));
     view->addActions({actions_.resetView, actions_.logPressure, actions_.showAtmosphere});
+    view->addMenu(compare_->menu());
     view->addSeparator();
     for (QDockWidget *d : findChildren<QDockWidget *>()) view->addAction(d->toggleViewAction());
     QMenu *help = menuBar()->addMenu(tr("&Help"));

@@ -15,6 +15,7 @@ class QComboBox;
 
 namespace pw::ui {
 
+class CompareController;
 class DiagramWidget;
 class PointsTable;
 class ReadoutPanel;
@@ -35,6 +36,8 @@ public:
     SubstanceChooser *chooser() const { return chooser_; }
     SessionController &session() const { return *session_; }
     const Actions &actions() const { return actions_; }
+    // The comparison mode (View > Compare): second substance, overlay/panels/reduced views.
+    CompareController *comparison() const { return compare_; }
 
     // Put a substance on the diagram (one undoable step).
     void chooseSubstance(const DiagramPtr &diagram);
@@ -83,6 +86,7 @@ private:
     QComboBox *tUnit_ = nullptr;
     QComboBox *pUnit_ = nullptr;
     QLabel *cursorStatus_ = nullptr;
+    CompareController *compare_ = nullptr;
 };
 
 }  // namespace pw::ui
