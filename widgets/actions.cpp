@@ -36,6 +36,11 @@ Actions createActions(QObject *owner, QUndoStack &stack) {
     a.exportPoints =
         make(owner, QObject::tr("&Export Points (CSV)…"), QKeySequence(Qt::CTRL | Qt::Key_E),
              QObject::tr("Save the points with their classification as CSV"));
+    a.exportFigure =
+        make(owner, QObject::tr("Export &Figure…"), QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_E),
+             QObject::tr("Save the diagram as an annotated PNG, SVG or PDF figure"));
+    a.copyFigure = make(owner, QObject::tr("Copy F&igure"), QKeySequence(),
+                        QObject::tr("Copy the annotated figure (image and SVG) to the clipboard"));
     a.openSubstance = make(owner, QObject::tr("Open Substance &File…"),
                            QKeySequence(Qt::CTRL | Qt::SHIFT | Qt::Key_O),
                            QObject::tr("Load a substance file (.json) and show its diagram"));

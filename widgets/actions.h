@@ -15,6 +15,8 @@ struct Actions {
     QAction *saveAs = nullptr;
     QAction *importPoints = nullptr;
     QAction *exportPoints = nullptr;
+    QAction *exportFigure = nullptr;  // widgets/figure/figure_actions.h
+    QAction *copyFigure = nullptr;
     QAction *openSubstance = nullptr;
     QAction *quit = nullptr;
     QAction *undo = nullptr;
