@@ -13,12 +13,12 @@
 namespace pw {
 
 struct ModelSpec {
-    std::string form;  // "wagner", "antoine", ... (docs/substance-format.md)
-    std::map<std::string, double> scalars;               // "T_ref", "P_ref", "A", "dH_J_mol"...
-    std::map<std::string, std::vector<double>> arrays;   // "a", "exponents", "b"
-    std::map<std::string, std::string> strings;          // "base", "exponent_set"
-    std::map<std::string, bool> flags;                   // "log"
-    TemperatureUnit tUnit = TemperatureUnit::Kelvin;     // units the parameters are in
+    std::string form;                       // "wagner", "antoine", ... (docs/substance-format.md)
+    std::map<std::string, double> scalars;  // "T_ref", "P_ref", "A", "dH_J_mol"...
+    std::map<std::string, std::vector<double>> arrays;  // "a", "exponents", "b"
+    std::map<std::string, std::string> strings;         // "base", "exponent_set"
+    std::map<std::string, bool> flags;                  // "log"
+    TemperatureUnit tUnit = TemperatureUnit::Kelvin;    // units the parameters are in
     PressureUnit pUnit = PressureUnit::Pa;
 };
 
