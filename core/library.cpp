@@ -9,6 +9,7 @@
 #include <filesystem>
 
 #include "core/errors.h"
+#include "core/io/read_diagram.h"
 #include "resources/bundled.h"
 
 namespace pw {
@@ -96,9 +97,9 @@ SubstanceLibrary SubstanceLibrary::bundled() {
     for (const auto &file : pw::bundled::files()) {
         if (!file.path.starts_with("substances/") || !file.path.ends_with(".json")) continue;
         const std::string name = "bundled:" + std::string(file.path.substr(11));
-        SubstanceReadResult r = readSubstance(file.content, name);
+        io::DiagramReadResult r = io::readSubstanceDiagram(file.content, name);
         lib.issues_.insert(lib.issues_.end(), r.issues.begin(), r.issues.end());
-        if (r.substance) lib.add(std::move(*r.substance));
+        if (r.diagram) lib.addDiagram(std::move(r.diagram));
     }
     return lib;
 }
@@ -114,9 +115,9 @@ SubstanceLibrary SubstanceLibrary::withUserFolder(const std::string &folder) {
     }
     std::sort(files.begin(), files.end());
     for (const auto &path : files) {
-        SubstanceReadResult r = readSubstanceFile(path.string());
+        io::DiagramReadResult r = io::readSubstanceDiagramFile(path.string());
         lib.issues_.insert(lib.issues_.end(), r.issues.begin(), r.issues.end());
-        if (r.substance) lib.add(std::move(*r.substance));
+        if (r.diagram) lib.addDiagram(std::move(r.diagram));
     }
     return lib;
 }
@@ -134,7 +135,7 @@ std::string SubstanceLibrary::defaultUserFolder() {
     return (base / "phasewright" / "substances").string();
 }
 
-bool SubstanceLibrary::add(Substance substance) {
+bool SubstanceLibrary::isDuplicate(const Substance &substance) {
     for (const auto &d : diagrams_) {
         if (d->substance().id != substance.id) continue;
         issues_.push_back(ValidationIssue{
@@ -142,8 +143,19 @@ bool SubstanceLibrary::add(Substance substance) {
             fmt::format("duplicate id '{}': already loaded from {}; this file is ignored (give "
                         "it an id of its own to keep both)",
                         substance.id, d->substance().origin)});
-        return false;
+        return true;
     }
+    return false;
+}
+
+bool SubstanceLibrary::addDiagram(std::shared_ptr<const PhaseDiagram> diagram) {
+    if (isDuplicate(diagram->substance())) return false;
+    diagrams_.push_back(std::move(diagram));
+    return true;
+}
+
+bool SubstanceLibrary::add(Substance substance) {
+    if (isDuplicate(substance)) return false;
     try {
         diagrams_.push_back(std::make_shared<const PhaseDiagram>(std::move(substance)));
     } catch (const std::exception &e) {
@@ -159,10 +171,9 @@ std::shared_ptr<const PhaseDiagram> SubstanceLibrary::find(std::string_view rawK
     const std::string key = trim(rawKey);
     if (key.empty()) throw Error("no substance given; expected an id, alias, formula or file");
     if (looksLikePath(key)) {
-        SubstanceReadResult r = readSubstanceFile(key);
-        if (!r.substance)
-            throw Error(fmt::format("substance file refused:{}", joinIssues(r.issues)));
-        return std::make_shared<const PhaseDiagram>(std::move(*r.substance));
+        io::DiagramReadResult r = io::readSubstanceDiagramFile(key);
+        if (!r.diagram) throw Error(fmt::format("substance file refused:{}", joinIssues(r.issues)));
+        return std::move(r.diagram);
     }
     const std::string k = lower(key);
     for (const auto &d : diagrams_)

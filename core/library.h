@@ -30,6 +30,10 @@ public:
     bool add(Substance substance);
 
 private:
+    // add() for a diagram already built (and validated) by the reader: no second build.
+    bool addDiagram(std::shared_ptr<const PhaseDiagram> diagram);
+    bool isDuplicate(const Substance &substance);
+
     std::vector<std::shared_ptr<const PhaseDiagram>> diagrams_;
     std::vector<ValidationIssue> issues_;
 };

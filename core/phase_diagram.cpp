@@ -149,12 +149,8 @@ void PhaseDiagram::buildSegments() {
             t.max_K = std::min(t.max_K, b.validity.max_K);
         }
         if (!t.valid()) t = seg.T;
-        try {
-            seg.table = InverseTable(b.model, t.min_K, t.max_K);
-        } catch (const DomainError &) {
-            // No table (a curve flat at its ends...): queries use the bracketed solver alone.
-            seg.table = InverseTable();
-        }
+        // Built on the first inverse query on this segment (core/boundary_segment.h).
+        seg.table = LazyInverseTable(b.model, t.min_K, t.max_K);
     }
 }
 

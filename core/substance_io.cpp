@@ -10,6 +10,7 @@
 #include <sstream>
 
 #include "core/io/json_guard.h"
+#include "core/io/read_diagram.h"
 #include "core/io/read_parts.h"
 #include "core/io/substance_checks.h"
 
@@ -107,7 +108,9 @@ std::string ValidationIssue::text() const {
     return s + message;
 }
 
-SubstanceReadResult readSubstance(std::string_view json, const std::string &fileName) {
+namespace io {
+
+DiagramReadResult readSubstanceDiagram(std::string_view json, const std::string &fileName) {
     Reader reader(fileName);
     Substance s;
     s.origin = fileName;
@@ -118,14 +121,15 @@ SubstanceReadResult readSubstance(std::string_view json, const std::string &file
     if (doc && doc->is_object() && readHeader(*doc, reader)) readContent(*doc, reader, s);
     if (!reader.hasErrors()) io::checkCurves(s, reader);
     if (!reader.hasErrors()) io::checkFixedPoints(s, reader);
-    if (!reader.hasErrors()) io::checkConsistency(s, reader);
-    SubstanceReadResult result;
-    if (!reader.hasErrors()) result.substance = std::move(s);
+    std::shared_ptr<const PhaseDiagram> diagram;
+    if (!reader.hasErrors()) diagram = io::buildAndCheckConsistency(std::move(s), reader);
+    DiagramReadResult result;
+    if (!reader.hasErrors()) result.diagram = std::move(diagram);
     result.issues = reader.take();
     return result;
 }
 
-SubstanceReadResult readSubstanceFile(const std::string &path) {
+DiagramReadResult readSubstanceDiagramFile(const std::string &path) {
     Reader reader(path);
     std::error_code ec;
     const auto status = std::filesystem::status(path, ec);
@@ -145,10 +149,29 @@ SubstanceReadResult readSubstanceFile(const std::string &path) {
         } else {
             std::ostringstream text;
             text << in.rdbuf();
-            return readSubstance(text.str(), path);
+            return readSubstanceDiagram(text.str(), path);
         }
     }
-    return SubstanceReadResult{std::nullopt, reader.take()};
+    return DiagramReadResult{nullptr, reader.take()};
+}
+
+}  // namespace io
+
+namespace {
+SubstanceReadResult withSubstance(io::DiagramReadResult r) {
+    SubstanceReadResult result;
+    if (r.diagram) result.substance = r.diagram->substance();
+    result.issues = std::move(r.issues);
+    return result;
+}
+}  // namespace
+
+SubstanceReadResult readSubstance(std::string_view json, const std::string &fileName) {
+    return withSubstance(io::readSubstanceDiagram(json, fileName));
+}
+
+SubstanceReadResult readSubstanceFile(const std::string &path) {
+    return withSubstance(io::readSubstanceDiagramFile(path));
 }
 
 std::string writeSubstance(const Substance &s) {

@@ -148,9 +148,14 @@ void checkFixedPoints(const Substance &s, Reader &reader) {
 }
 
 void checkConsistency(const Substance &s, Reader &reader) {
+    (void)buildAndCheckConsistency(s, reader);
+}
+
+std::shared_ptr<PhaseDiagram> buildAndCheckConsistency(Substance s, Reader &reader) {
+    std::shared_ptr<PhaseDiagram> diagram;
     try {
-        const PhaseDiagram diagram(s);
-        for (const Finding &f : diagram.consistency()) {
+        diagram = std::make_shared<PhaseDiagram>(std::move(s));
+        for (const Finding &f : diagram->consistency()) {
             if (f.severity == Severity::Info) continue;  // passed checks
             const auto it = consistencyPaths().find(f.check);
             if (it != consistencyPaths().end() && it->second.empty()) continue;
@@ -164,7 +169,9 @@ void checkConsistency(const Substance &s, Reader &reader) {
     } catch (const std::exception &e) {
         reader.error("/boundaries",
                      fmt::format("the data cannot form a phase diagram: {}", e.what()));
+        return nullptr;
     }
+    return diagram;
 }
 
 }  // namespace pw::io
