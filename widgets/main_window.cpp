@@ -20,13 +20,13 @@
 #include "core/substance_io.h"
 #include "widgets/caution.h"
 #include "widgets/commands.h"
-#include "widgets/compare/compare_controller.h"
 #include "widgets/diagram_widget.h"
-#include "widgets/figure/figure_actions.h"
 #include "widgets/format.h"
 #include "widgets/points_csv.h"
 #include "widgets/points_table.h"
 #include "widgets/readout_panel.h"
+#include "widgets/runs/runs_panel.h"
+#include "widgets/runs/runs_ui.h"
 #include "widgets/session_controller.h"
 #include "widgets/substance_chooser.h"
 
@@ -61,8 +61,7 @@ MainWindow::MainWindow(Settings &settings, SubstanceLibrary &library, const QStr
     setCentralWidget(diagram_);
     setAcceptDrops(true);
     buildDocks();
-    compare_ = new CompareController(*this, doc_, settings_, library_, points_->view(),
-                                     PointsModel::PhaseCol);
+    buildRunsUi();
     buildMenus();
     buildToolBar();
     connectActions();
@@ -122,7 +121,6 @@ void MainWindow::buildMenus() {
     file->addActions({actions_.save, actions_.saveAs});
     file->addSeparator();
     file->addActions({actions_.importPoints, actions_.exportPoints, actions_.openSubstance});
-    file->addAction(actions_.exportFigure);
     file->addSeparator();
     file->addAction(actions_.quit);
     QMenu *edit = menuBar()->addMenu(tr("&Edit"));
@@ -130,12 +128,12 @@ void MainWindow::buildMenus() {
     edit->addSeparator();
     edit->addActions({actions_.deletePoints, actions_.moveUp, actions_.moveDown});
     edit->addSeparator();
-    edit->addActions({actions_.copyDiagram, actions_.copyFigure, actions_.findSubstance});
+    edit->addActions({actions_.copyDiagram, actions_.findSubstance});
     QMenu *view = menuBar()->addMenu(tr("&View"));
     view->addActions({actions_.resetView, actions_.logPressure, actions_.showAtmosphere});
-    view->addMenu(compare_->menu());
     view->addSeparator();
     for (QDockWidget *d : findChildren<QDockWidget *>()) view->addAction(d->toggleViewAction());
+    addRunsMenus(*this, *runs_, library_);
     QMenu *help = menuBar()->addMenu(tr("&Help"));
     help->addActions({actions_.caution, actions_.about});
     updateRecentMenu();
@@ -198,7 +196,6 @@ void MainWindow::connectActions() {
     connect(actions_.deletePoints, &QAction::triggered, points_, &PointsTable::deleteSelected);
     connect(actions_.moveUp, &QAction::triggered, this, [this] { points_->moveSelected(-1); });
     connect(actions_.moveDown, &QAction::triggered, this, [this] { points_->moveSelected(+1); });
-    connectFigureActions(*this, actions_, [this] { return diagram_->scene(); }, settings_);
     connect(actions_.copyDiagram, &QAction::triggered, this, [this] {
         QGuiApplication::clipboard()->setImage(diagram_->toImage());
         statusBar()->showMessage(tr("Diagram copied to the clipboard"), 4000);
@@ -451,7 +448,13 @@ void MainWindow::loadDemo() {
                       {tr("primary drying"), 238.15, 10.0},
                       {tr("chamber too high"), 243.15, 60.0},
                       {tr("secondary drying"), 313.15, 3.0}});
+    runs_->loadDemo("freeze-drying");
     doc_.undoStack().setClean();
+}
+
+void MainWindow::buildRunsUi() {
+    runs_ = addRunsDocks(*this, *diagram_, doc_, settings_, library_);
+    runs_->setSubstanceChooser([this](const DiagramPtr &d) { chooseSubstance(d); });
 }
 
 void MainWindow::closeEvent(QCloseEvent *event) {

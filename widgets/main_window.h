@@ -15,8 +15,8 @@ class QComboBox;
 
 namespace pw::ui {
 
-class CompareController;
 class DiagramWidget;
+class RunsPanel;
 class PointsTable;
 class ReadoutPanel;
 class SessionController;
@@ -36,8 +36,8 @@ public:
     SubstanceChooser *chooser() const { return chooser_; }
     SessionController &session() const { return *session_; }
     const Actions &actions() const { return actions_; }
-    // The comparison mode (View > Compare): second substance, overlay/panels/reduced views.
-    CompareController *comparison() const { return compare_; }
+    // Logged runs, planned paths and rules (Runs dock, time chart dock, Runs menu).
+    RunsPanel *runsPanel() const { return runs_; }
 
     // Put a substance on the diagram (one undoable step).
     void chooseSubstance(const DiagramPtr &diagram);
@@ -86,7 +86,8 @@ private:
     QComboBox *tUnit_ = nullptr;
     QComboBox *pUnit_ = nullptr;
     QLabel *cursorStatus_ = nullptr;
-    CompareController *compare_ = nullptr;
+    RunsPanel *runs_ = nullptr;
+    void buildRunsUi();
 };
 
 }  // namespace pw::ui

@@ -104,6 +104,12 @@ RunsPanel::RunsPanel(DiagramWidget &diagram, Document &doc, Settings &settings,
     connect(overlay_, &RunOverlay::pathHoverLeft, chart_, &TimeChart::clearCursor);
 }
 
+TimeChart *RunsPanel::chart() const { return chart_; }
+
+RunsPanel::~RunsPanel() {
+    if (chart_ && !chart_->parent()) delete chart_;
+}
+
 void RunsPanel::setSubstanceChooser(std::function<void(const DiagramPtr &)> choose) {
     choose_ = std::move(choose);
 }

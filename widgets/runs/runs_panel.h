@@ -3,6 +3,7 @@
 // events of the selected run, its rule verdicts (load a rule file, export the events and
 // verdicts CSV) and a plan editor (type steps or pick a bundled plan). It owns the overlay on
 // the diagram and the time chart (placed by the main window) and links their cursors.
+#include <QPointer>
 #include <QWidget>
 #include <functional>
 
@@ -29,12 +30,13 @@ class RunsPanel : public QWidget {
 public:
     RunsPanel(DiagramWidget &diagram, Document &doc, Settings &settings,
               const SubstanceLibrary &library, QWidget *parent = nullptr);
+    ~RunsPanel() override;  // deletes the chart when no dock took it
 
     // How the panel puts a substance on the diagram (the main window's undoable command);
     // default: Document::setSubstances.
     void setSubstanceChooser(std::function<void(const DiagramPtr &)> choose);
 
-    TimeChart *chart() const { return chart_; }
+    TimeChart *chart() const;
     RunOverlay *overlay() const { return overlay_; }
     QTableWidget *eventsTable() const { return events_; }
     QTableWidget *verdictsTable() const { return verdicts_; }
@@ -69,7 +71,7 @@ private:
     const SubstanceLibrary &library_;
     std::function<void(const DiagramPtr &)> choose_;
     RunOverlay *overlay_;
-    TimeChart *chart_;
+    QPointer<TimeChart> chart_;
     QComboBox *runs_;
     QTabWidget *tabs_;
     QTableWidget *events_;
