@@ -20,7 +20,9 @@
 #include "core/substance_io.h"
 #include "widgets/caution.h"
 #include "widgets/commands.h"
+#include "widgets/compare/compare_controller.h"
 #include "widgets/diagram_widget.h"
+#include "widgets/figure/figure_actions.h"
 #include "widgets/format.h"
 #include "widgets/points_csv.h"
 #include "widgets/points_table.h"
@@ -62,6 +64,8 @@ MainWindow::MainWindow(Settings &settings, SubstanceLibrary &library, const QStr
     setAcceptDrops(true);
     buildDocks();
     buildRunsUi();
+    compare_ = new CompareController(*this, doc_, settings_, library_, points_->view(),
+                                     PointsModel::PhaseCol);
     buildMenus();
     buildToolBar();
     connectActions();
@@ -121,6 +125,7 @@ void MainWindow::buildMenus() {
     file->addActions({actions_.save, actions_.saveAs});
     file->addSeparator();
     file->addActions({actions_.importPoints, actions_.exportPoints, actions_.openSubstance});
+    file->addAction(actions_.exportFigure);
     file->addSeparator();
     file->addAction(actions_.quit);
     QMenu *edit = menuBar()->addMenu(tr("&Edit"));
@@ -128,9 +133,10 @@ void MainWindow::buildMenus() {
     edit->addSeparator();
     edit->addActions({actions_.deletePoints, actions_.moveUp, actions_.moveDown});
     edit->addSeparator();
-    edit->addActions({actions_.copyDiagram, actions_.findSubstance});
+    edit->addActions({actions_.copyDiagram, actions_.copyFigure, actions_.findSubstance});
     QMenu *view = menuBar()->addMenu(tr("&View"));
     view->addActions({actions_.resetView, actions_.logPressure, actions_.showAtmosphere});
+    view->addMenu(compare_->menu());
     view->addSeparator();
     for (QDockWidget *d : findChildren<QDockWidget *>()) view->addAction(d->toggleViewAction());
     addRunsMenus(*this, *runs_, library_);
@@ -196,6 +202,7 @@ void MainWindow::connectActions() {
     connect(actions_.deletePoints, &QAction::triggered, points_, &PointsTable::deleteSelected);
     connect(actions_.moveUp, &QAction::triggered, this, [this] { points_->moveSelected(-1); });
     connect(actions_.moveDown, &QAction::triggered, this, [this] { points_->moveSelected(+1); });
+    connectFigureActions(*this, actions_, [this] { return diagram_->scene(); }, settings_);
     connect(actions_.copyDiagram, &QAction::triggered, this, [this] {
         QGuiApplication::clipboard()->setImage(diagram_->toImage());
         statusBar()->showMessage(tr("Diagram copied to the clipboard"), 4000);

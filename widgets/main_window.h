@@ -15,6 +15,7 @@ class QComboBox;
 
 namespace pw::ui {
 
+class CompareController;
 class DiagramWidget;
 class RunsPanel;
 class PointsTable;
@@ -38,6 +39,8 @@ public:
     const Actions &actions() const { return actions_; }
     // Logged runs, planned paths and rules (Runs dock, time chart dock, Runs menu).
     RunsPanel *runsPanel() const { return runs_; }
+    // The comparison mode (View > Compare): second substance, overlay/panels/reduced views.
+    CompareController *comparison() const { return compare_; }
 
     // Put a substance on the diagram (one undoable step).
     void chooseSubstance(const DiagramPtr &diagram);
@@ -88,6 +91,7 @@ private:
     QLabel *cursorStatus_ = nullptr;
     RunsPanel *runs_ = nullptr;
     void buildRunsUi();
+    CompareController *compare_ = nullptr;
 };
 
 }  // namespace pw::ui
