@@ -60,7 +60,7 @@ TEST_F(CliPlot, PngAtWidthAndDpiHasExactPixelSize) {
               0)
         << err;
     EXPECT_EQ(QImage(QString::fromStdString(file("w.png"))).width(), 1004);
-    // 170 mm at 150 dpi: 1003.9 -> 1004 px as well; explicit pixels are taken as given.
+    // Explicit pixels are taken as given.
     ASSERT_EQ(run({"--substance", "CO2", "--output", file("c.png"), "--width-px", "800",
                    "--height-px", "600"}),
               0)
