@@ -34,6 +34,7 @@ State stateAtTime(const std::vector<State> &states, double time_s) {
     if (time_s >= states.back().time_s) return states.back();
     const auto it = std::lower_bound(states.begin(), states.end(), time_s,
                                      [](const State &s, double t) { return s.time_s < t; });
+    if (it->time_s == time_s) return *it;  // a sample: exactly its values
     const State &b = *it;
     const State &a = *(it - 1);
     const double span = b.time_s - a.time_s;
@@ -53,6 +54,7 @@ RunImportJob::RunImportJob(std::shared_ptr<const PhaseDiagram> diagram, QString 
 RunImportJob::~RunImportJob() {
     cancel_ = true;
     wait();
+    delete thread_;
 }
 
 void RunImportJob::start() {
