@@ -25,15 +25,30 @@ void checkState(double T, double P) {
             fmt::format("pressure must be a finite number above 0 Pa (got {} Pa)", P));
 }
 
-std::string formOf(const Boundary *b) {
-    return (b == nullptr || b->solidForm.empty()) ? std::string("solid") : b->solidForm;
+std::string_view formOf(const Boundary *b) {
+    return (b == nullptr || b->solidForm.empty()) ? std::string_view("solid")
+                                                  : std::string_view(b->solidForm);
 }
 
-Classification unknown(std::string reason) {
-    Classification c;
+ClassificationView unknown(std::string reason) {
+    ClassificationView c;
     c.phase = Phase::Unknown;
     c.reason = std::move(reason);
     return c;
+}
+
+// Every combination of the three flags, indexed by on_boundary + 2 within + 4 extrapolated.
+constexpr std::string_view kFlags[8] = {"",
+                                        "on_boundary",
+                                        "within_uncertainty",
+                                        "on_boundary within_uncertainty",
+                                        "extrapolated",
+                                        "on_boundary extrapolated",
+                                        "within_uncertainty extrapolated",
+                                        "on_boundary within_uncertainty extrapolated"};
+
+std::string_view flagsOf(bool onBoundary, bool within, bool extrapolated) {
+    return kFlags[(onBoundary ? 1 : 0) + (within ? 2 : 0) + (extrapolated ? 4 : 0)];
 }
 
 }  // namespace
@@ -57,15 +72,11 @@ std::string_view toString(Phase phase) {
 }
 
 std::string flagsText(const Classification &c) {
-    std::string s;
-    auto add = [&s](const char *flag) {
-        if (!s.empty()) s += ' ';
-        s += flag;
-    };
-    if (c.onBoundary) add("on_boundary");
-    if (c.withinUncertainty) add("within_uncertainty");
-    if (c.extrapolated) add("extrapolated");
-    return s;
+    return std::string(flagsOf(c.onBoundary, c.withinUncertainty, c.extrapolated));
+}
+
+std::string_view flagsText(const ClassificationView &c) {
+    return flagsOf(c.onBoundary, c.withinUncertainty, c.extrapolated);
 }
 
 Classifier::Classifier(const PhaseDiagram &diagram, ClassifyOptions options)
@@ -97,9 +108,16 @@ Classifier::Classifier(const PhaseDiagram &diagram, ClassifyOptions options)
         vaporSolidForm_ = formOf(diagram.melting().front());
     else
         vaporSolidForm_ = "solid";
+    for (const Boundary &b : diagram.substance().boundaries) labels_.emplace_back(&b, b.label());
 }
 
-std::string Classifier::solidFormAt(double T, double P, const Boundary *melt) const {
+std::string_view Classifier::labelOf(const Boundary *b) const {
+    for (const auto &[boundary, label] : labels_)
+        if (boundary == b) return label;
+    return {};  // not reached: every boundary of the diagram has its label
+}
+
+std::string_view Classifier::solidFormAt(double T, double P, const Boundary *melt) const {
     if (segments_.size() <= 1) return melt ? formOf(melt) : vaporSolidForm_;
     for (const Segment &s : segments_)
         if (P >= s.pLow && P <= s.pHigh && T >= s.tLow) return formOf(s.boundary);
@@ -130,7 +148,7 @@ std::optional<BoundaryValue> Classifier::pressureOn(const Boundary *b, double T)
     return v;
 }
 
-void Classifier::fillMargins(Classification &c, double T, double P,
+void Classifier::fillMargins(ClassificationView &c, double T, double P,
                              std::span<const Candidate> candidates) const {
     const Candidate *best = nullptr;
     for (const Candidate &k : candidates) {
@@ -146,7 +164,7 @@ void Classifier::fillMargins(Classification &c, double T, double P,
         c.nearestLabel = "critical point";
         pOnCurve = pc_;
     } else {
-        c.nearestLabel = best->boundary->label();
+        c.nearestLabel = labelOf(best->boundary);
         if (const OptValue v = pressureOn(best->boundary, T)) {
             pOnCurve = v->value;
             c.extrapolated = c.extrapolated || v->extrapolated;
@@ -166,10 +184,26 @@ Classifier::Candidate Classifier::fromValue(const std::optional<BoundaryValue> &
 }
 
 Classification Classifier::operator()(double T, double P) const {
+    ClassificationView v = view(T, P);
+    Classification c;
+    c.phase = v.phase;
+    c.solidForm = std::string(v.solidForm);
+    c.nearest = v.nearest;
+    c.nearestLabel = std::string(v.nearestLabel);
+    c.dT_K = v.dT_K;
+    c.dP_Pa = v.dP_Pa;
+    c.onBoundary = v.onBoundary;
+    c.withinUncertainty = v.withinUncertainty;
+    c.extrapolated = v.extrapolated;
+    c.reason = std::move(v.reason);
+    return c;
+}
+
+ClassificationView Classifier::view(double T, double P) const {
     checkState(T, P);
     if (!std::isfinite(pt_)) return unknown("no triple-point data for this substance");
     const Candidate critical{nullptr, Tc_, false};
-    Classification c;
+    ClassificationView c;
     if (T >= Tc_ && P < pc_) {
         c.phase = Phase::Gas;
         fillMargins(c, T, P, {&critical, 1});
@@ -207,9 +241,17 @@ Classification Classifier::operator()(double T, double P) const {
         fillMargins(c, T, P, k);
         return c;
     }
+    return abovePc(T, P, melt);
+}
+
+// p >= pc, not solid: compressed liquid (margins to melting or the critical point) or
+// supercritical (margins to the critical point).
+ClassificationView Classifier::abovePc(double T, double P, const OptValue &melt) const {
     if (!melt)
         return unknown(fmt::format("no melting curve at {} Pa: a solid cannot be ruled out", P));
+    const Candidate critical{nullptr, Tc_, false};
     const Candidate k[2] = {fromValue(melt), critical};
+    ClassificationView c;
     c.phase = T < Tc_ ? Phase::Liquid : Phase::Supercritical;
     c.extrapolated = melt->extrapolated;
     fillMargins(c, T, P,

@@ -13,6 +13,7 @@
 #include <span>
 #include <string>
 #include <string_view>
+#include <utility>
 #include <vector>
 
 #include "core/phase_diagram.h"
@@ -42,6 +43,22 @@ struct Classification {
     std::string reason;              // why Unknown (e.g. "no melting data above 1 GPa")
 };
 
+// The same result without a string built per point, for tables of millions of rows:
+// solidForm and nearestLabel view text owned by the Classifier that made it (or by its
+// diagram), valid while both live; reason is set only for Unknown.
+struct ClassificationView {
+    Phase phase = Phase::Unknown;
+    std::string_view solidForm;
+    const Boundary *nearest = nullptr;
+    std::string_view nearestLabel;
+    double dT_K = kNaN;
+    double dP_Pa = kNaN;
+    bool onBoundary = false;
+    bool withinUncertainty = false;
+    bool extrapolated = false;
+    std::string reason;
+};
+
 // Throws DomainError for T <= 0, p <= 0 or non-finite input.
 Classification classify(const PhaseDiagram &diagram, double T_K, double P_Pa,
                         const ClassifyOptions &options = {});
@@ -53,6 +70,8 @@ class Classifier {
 public:
     explicit Classifier(const PhaseDiagram &diagram, ClassifyOptions options = {});
     Classification operator()(double T_K, double P_Pa) const;
+    // The same classification as operator(), texts as views (see ClassificationView).
+    ClassificationView view(double T_K, double P_Pa) const;
     const PhaseDiagram &diagram() const { return *diagram_; }
 
 private:
@@ -68,11 +87,13 @@ private:
         double T_K = kNaN;
         bool extrapolated = false;
     };
-    std::string solidFormAt(double T, double P, const Boundary *melt) const;
+    std::string_view solidFormAt(double T, double P, const Boundary *melt) const;
+    std::string_view labelOf(const Boundary *b) const;
     std::optional<BoundaryValue> pressureOn(const Boundary *b, double T) const;
     static Candidate fromValue(const std::optional<BoundaryValue> &v);
-    void fillMargins(Classification &c, double T, double P,
+    void fillMargins(ClassificationView &c, double T, double P,
                      std::span<const Candidate> candidates) const;
+    ClassificationView abovePc(double T, double P, const std::optional<BoundaryValue> &melt) const;
 
     const PhaseDiagram *diagram_;
     ClassifyOptions options_;
@@ -80,9 +101,11 @@ private:
     std::vector<Segment> segments_;  // melting segments by increasing pressure
     double lowestSolidSolidLiquid_Pa = kNaN;
     std::string vaporSolidForm_;  // the solid that borders the vapor ("ice Ih", "solid")
+    std::vector<std::pair<const Boundary *, std::string>> labels_;  // Boundary::label() once
 };
 
 // Space-separated flags for tables: "on_boundary", "within_uncertainty", "extrapolated".
 std::string flagsText(const Classification &c);
+std::string_view flagsText(const ClassificationView &c);  // the same text, no allocation
 
 }  // namespace pw

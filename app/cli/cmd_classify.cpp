@@ -69,7 +69,7 @@ void classifyPoint(const ClassifyArgs &a, Io &io) {
     if (const std::string f = flagsText(c); !f.empty()) io.out << "  flags: " << f << '\n';
 }
 
-void writeRow(csv::Writer &w, std::string_view record, const Classification &c) {
+void writeRow(csv::Writer &w, std::string_view record, const ClassificationView &c) {
     w.raw(record);
     w.field(toString(c.phase));
     w.field(c.solidForm);
@@ -77,12 +77,11 @@ void writeRow(csv::Writer &w, std::string_view record, const Classification &c) 
     w.field(c.dT_K);
     w.field(c.dP_Pa);
     w.field(c.onBoundary ? std::string_view("true") : std::string_view("false"));
-    if (c.phase == Phase::Unknown) {
-        std::string f = flagsText(c);
-        w.field(f.empty() ? c.reason : f + " " + c.reason);
-    } else {
-        w.field(flagsText(c));
-    }
+    const std::string_view flags = flagsText(c);
+    if (c.phase == Phase::Unknown)
+        w.field(flags.empty() ? c.reason : fmt::format("{} {}", flags, c.reason));
+    else
+        w.field(flags);
     w.endRow();
 }
 
@@ -108,8 +107,8 @@ void classifyFile(const ClassifyArgs &a, Io &io) {
     for (;;) {
         try {
             if (!reader.next()) break;
-            const RowState s = readState(reader, cols);
-            writeRow(w, reader.record(), classifier(s.T_K, s.P_Pa));
+            const RowState s = readState(reader, cols, a.file.decimalComma);
+            writeRow(w, reader.record(), classifier.view(s.T_K, s.P_Pa));
         } catch (const InputError &e) {
             if (!a.file.skipBad) throw;
             ++bad;

@@ -2,6 +2,7 @@
 
 #include <fmt/format.h>
 
+#include <charconv>
 #include <cmath>
 #include <fstream>
 #include <iostream>
@@ -71,8 +72,30 @@ InputFile::InputFile(const std::string &path, std::istream &standardInput)
     stream_ = owned_.get();
 }
 
+namespace {
+
+// A cell that std::from_chars reads whole as a finite number (so without blanks, a '+' sign
+// or a decimal comma) is the number Reader::number would give; any other cell goes through
+// Reader::number, which names file, row and column when it is not a number.
+double cellNumber(const csv::Reader &reader, std::size_t column, bool decimalComma) {
+    if (!decimalComma) {
+        const std::string_view cell = reader.field(column);
+        double v = 0.0;
+        const auto [ptr, ec] = std::from_chars(cell.data(), cell.data() + cell.size(), v);
+        if (ec == std::errc() && ptr == cell.data() + cell.size() && std::isfinite(v)) return v;
+    }
+    return reader.number(column);
+}
+
+}  // namespace
+
 RowState readState(const csv::Reader &reader, const csv::StateColumns &columns) {
-    const double t = reader.number(columns.t), p = reader.number(columns.p);
+    return readState(reader, columns, true);  // the decimal mark is not known here: full checks
+}
+
+RowState readState(const csv::Reader &reader, const csv::StateColumns &columns, bool decimalComma) {
+    const double t = cellNumber(reader, columns.t, decimalComma);
+    const double p = cellNumber(reader, columns.p, decimalComma);
     const double T = toKelvin(t, columns.tUnit), P = toPascal(p, columns.pUnit);
     if (!(T > 0.0))
         throw InputError(reader.fileName(), reader.row(), reader.header()[columns.t],

@@ -47,6 +47,9 @@ struct RowState {
     double T_K, P_Pa;
 };
 RowState readState(const csv::Reader &reader, const csv::StateColumns &columns);
+// The same for files read without --decimal-comma (decimalComma false): plain numbers take a
+// shorter path (one std::from_chars); anything else goes through the checks above.
+RowState readState(const csv::Reader &reader, const csv::StateColumns &columns, bool decimalComma);
 
 // The time of one row in seconds (numeric column times its unit, or an ISO 8601 timestamp);
 // NaN without a time column.

@@ -1,6 +1,6 @@
 #include "core/csv/writer.h"
 
-#include <array>
+#include <algorithm>
 #include <charconv>
 #include <cmath>
 #include <ostream>
@@ -9,55 +9,49 @@
 
 namespace pw::csv {
 
+namespace {
+constexpr std::size_t kSlack = 4096;  // room past the flush limit for the row being written
+constexpr std::size_t kNumberBytes = 32;
+}  // namespace
+
 Writer::Writer(std::ostream &out, char delimiter, std::size_t bufferBytes)
-    : out_(out), delimiter_(delimiter), limit_(bufferBytes) {
-    buffer_.reserve(limit_ + 4096);
+    : out_(out),
+      delimiter_(delimiter),
+      limit_(bufferBytes),
+      data_(std::make_unique<char[]>(bufferBytes + kSlack)),
+      pos_(data_.get()),
+      end_(data_.get() + bufferBytes + kSlack) {}
+
+void Writer::grow(std::size_t bytes) {
+    const std::size_t used = size();
+    const std::size_t capacity =
+        std::max(2 * static_cast<std::size_t>(end_ - data_.get()), used + bytes + kSlack);
+    auto bigger = std::make_unique<char[]>(capacity);
+    if (used > 0) std::memcpy(bigger.get(), data_.get(), used);
+    data_ = std::move(bigger);
+    pos_ = data_.get() + used;
+    end_ = data_.get() + capacity;
 }
 
-void Writer::separate() {
-    if (!rowStart_) buffer_ += delimiter_;
-    rowStart_ = false;
-}
-
-void Writer::raw(std::string_view text) {
-    separate();
-    buffer_.append(text);
-}
-
-void Writer::field(std::string_view text) {
-    separate();
-    const bool quote =
-        text.find_first_of(std::string_view("\"\r\n", 3)) != std::string_view::npos ||
-        text.find(delimiter_) != std::string_view::npos;
-    if (!quote) {
-        buffer_.append(text);
-        return;
-    }
-    buffer_ += '"';
+void Writer::putQuoted(std::string_view text) {
+    put('"');
     for (char c : text) {
-        if (c == '"') buffer_ += '"';
-        buffer_ += c;
+        if (c == '"') put('"');
+        put(c);
     }
-    buffer_ += '"';
+    put('"');
 }
 
 void Writer::field(double value) {
     separate();
     if (std::isnan(value)) return;
-    std::array<char, 32> text{};
-    const auto result = std::to_chars(text.data(), text.data() + text.size(), value);
-    buffer_.append(text.data(), result.ptr);
-}
-
-void Writer::endRow() {
-    buffer_ += '\n';
-    rowStart_ = true;
-    maybeFlush();
+    if (room() < kNumberBytes) grow(kNumberBytes);
+    pos_ = std::to_chars(pos_, end_, value).ptr;
 }
 
 void Writer::flush() {
-    if (!buffer_.empty()) out_.write(buffer_.data(), static_cast<std::streamsize>(buffer_.size()));
-    buffer_.clear();
+    if (size() > 0) out_.write(data_.get(), static_cast<std::streamsize>(size()));
+    pos_ = data_.get();
     out_.flush();
     if (!out_) throw Error("writing the output failed (disk full or the stream was closed?)");
 }

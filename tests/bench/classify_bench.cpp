@@ -40,6 +40,20 @@ void BM_ClassifyWater(benchmark::State &state) {
 }
 BENCHMARK(BM_ClassifyWater);
 
+// The allocation-free form the command line uses for tables (texts as views).
+void BM_ClassifyWaterView(benchmark::State &state) {
+    const auto diagram = pw::SubstanceLibrary::bundled().find("water");
+    const pw::Classifier classify(*diagram);
+    const auto points = waterPoints(4096);
+    std::size_t i = 0;
+    for (auto _ : state) {
+        const Point &p = points[i++ & 4095];
+        benchmark::DoNotOptimize(classify.view(p.T, p.P));
+    }
+    state.SetItemsProcessed(state.iterations());
+}
+BENCHMARK(BM_ClassifyWaterView);
+
 std::string csvText(std::size_t rows) {
     std::string s = "T [K],P [Pa]\n";
     for (const Point &p : waterPoints(rows))
@@ -79,6 +93,36 @@ void BM_CsvWrite(benchmark::State &state) {
     state.SetItemsProcessed(state.iterations() * 100000);
 }
 BENCHMARK(BM_CsvWrite)->Unit(benchmark::kMillisecond);
+
+// Per-row work of `classify --input` without the process start-up: parse T and P, classify,
+// write the input record and the seven result columns (as app/cli/cmd_classify.cpp does).
+void BM_ClassifyRows(benchmark::State &state) {
+    const auto diagram = pw::SubstanceLibrary::bundled().find("water");
+    const pw::Classifier classify(*diagram);
+    const std::string text = csvText(100000);
+    for (auto _ : state) {
+        std::istringstream in(text);
+        std::ostringstream out;
+        pw::csv::Reader r(in, "bench.csv");
+        pw::csv::Writer w(out);
+        while (r.next()) {
+            const pw::ClassificationView c = classify.view(r.number(0), r.number(1));
+            w.raw(r.record());
+            w.field(pw::toString(c.phase));
+            w.field(c.solidForm);
+            w.field(c.nearestLabel);
+            w.field(c.dT_K);
+            w.field(c.dP_Pa);
+            w.field(c.onBoundary ? std::string_view("true") : std::string_view("false"));
+            w.field(pw::flagsText(c));
+            w.endRow();
+        }
+        w.flush();
+        benchmark::DoNotOptimize(out.str().size());
+    }
+    state.SetItemsProcessed(state.iterations() * 100000);
+}
+BENCHMARK(BM_ClassifyRows)->Unit(benchmark::kMillisecond);
 
 }  // namespace
 
