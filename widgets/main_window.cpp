@@ -202,7 +202,8 @@ void MainWindow::connectActions() {
     connect(actions_.deletePoints, &QAction::triggered, points_, &PointsTable::deleteSelected);
     connect(actions_.moveUp, &QAction::triggered, this, [this] { points_->moveSelected(-1); });
     connect(actions_.moveDown, &QAction::triggered, this, [this] { points_->moveSelected(+1); });
-    connectFigureActions(*this, actions_, [this] { return diagram_->scene(); }, settings_);
+    connectFigureActions(
+        *this, actions_, [this] { return diagram_->scene(); }, settings_);
     connect(actions_.copyDiagram, &QAction::triggered, this, [this] {
         QGuiApplication::clipboard()->setImage(diagram_->toImage());
         statusBar()->showMessage(tr("Diagram copied to the clipboard"), 4000);
