@@ -1,6 +1,7 @@
 #include "widgets/runs/runs_panel.h"
 
 #include <QComboBox>
+#include <QDockWidget>
 #include <QFileDialog>
 #include <QHBoxLayout>
 #include <QHeaderView>
@@ -189,6 +190,7 @@ void RunsPanel::addRun(RunPtr run) {
     runs_->addItem(list_.back()->title);
     runs_->setCurrentIndex(runs_->count() - 1);
     selectRun(runs_->currentIndex());
+    if (auto *dock = qobject_cast<QDockWidget *>(chart_->parentWidget())) dock->raise();
 }
 
 void RunsPanel::selectRun(int index) {

@@ -56,8 +56,13 @@ RunsPanel *addRunsDocks(QMainWindow &window, DiagramWidget &diagram, Document &d
     auto *panel = new RunsPanel(diagram, doc, settings, library, &window);
     addDock(window, QObject::tr("Runs"), QStringLiteral("runsDock"), panel,
             Qt::RightDockWidgetArea);
-    addDock(window, QObject::tr("Time chart"), QStringLiteral("timeChartDock"), panel->chart(),
-            Qt::BottomDockWidgetArea);
+    QDockWidget *chart = addDock(window, QObject::tr("Time chart"), QStringLiteral("timeChartDock"),
+                                 panel->chart(), Qt::BottomDockWidgetArea);
+    // Full width under the diagram: shares the bottom area with the points table as a tab.
+    if (auto *points = window.findChild<QDockWidget *>(QStringLiteral("pointsDock"))) {
+        window.tabifyDockWidget(points, chart);
+        points->raise();  // the chart comes to the front when a run is added
+    }
     return panel;
 }
 
