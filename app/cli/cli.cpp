@@ -31,7 +31,7 @@ int run(const std::vector<std::string> &args, Io io) {
     CLI::App app{
         "phasewright-cli: phase of a pure substance at a state point, margins to its phase "
         "boundaries, path crossings, fits and figures.\n"
-        "Exit codes: 0 ok, 1 bad input, 2 usage error.",
+        "Exit codes: 0 ok, 1 bad input, 2 usage error, 3 a rule failed (path --rules).",
         "phasewright-cli"};
     app.set_version_flag("--version", std::string("phasewright-cli ") + PW_VERSION);
     app.require_subcommand(1);
@@ -46,6 +46,8 @@ int run(const std::vector<std::string> &args, Io io) {
         const bool informational = e.get_exit_code() == 0;
         app.exit(e, io.out, io.err);
         return informational ? kExitOk : kExitUsage;
+    } catch (const RulesFailed &) {
+        return kExitRulesFailed;
     } catch (const pw::Error &e) {
         io.err << "phasewright-cli: error: " << e.what() << '\n';
         return kExitBadInput;

@@ -1,6 +1,7 @@
 #pragma once
 // The command-line front end. Exit codes: 0 ok, 1 bad input (files, values, substances),
-// 2 usage error (unknown or conflicting options).
+// 2 usage error (unknown or conflicting options), 3 a checked rule failed (path --rules).
+#include <exception>
 #include <iosfwd>
 #include <string>
 #include <vector>
@@ -14,6 +15,12 @@ namespace pw::cli {
 inline constexpr int kExitOk = 0;
 inline constexpr int kExitBadInput = 1;
 inline constexpr int kExitUsage = 2;
+inline constexpr int kExitRulesFailed = 3;  // path --rules: the run broke a rule
+
+// Thrown by a command whose output is complete but whose checks failed (exit 3).
+struct RulesFailed : std::exception {
+    const char *what() const noexcept override { return "a rule failed"; }
+};
 
 // Streams the commands write to; tests substitute string streams.
 struct Io {

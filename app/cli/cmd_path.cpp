@@ -4,15 +4,22 @@
 
 #include <chrono>
 #include <cmath>
+#include <fstream>
 #include <memory>
 #include <nlohmann/json.hpp>
+#include <optional>
 #include <ostream>
+#include <sstream>
 
 #include "app/cli/cli.h"
 #include "app/cli/state_input.h"
 #include "app/cli/substance_arg.h"
 #include "core/errors.h"
 #include "core/path.h"
+#include "core/run/report.h"
+#include "core/run/rules.h"
+#include "core/run/run_analysis.h"
+#include "core/run/run_log.h"
 
 namespace pw::cli {
 namespace {
@@ -21,6 +28,8 @@ struct PathArgs {
     std::string substance;
     std::optional<std::string> tUnit, pUnit;
     bool json = false;
+    std::string rules;      // rule file (docs/runs.md); verdicts printed, exit 3 on a failure
+    std::string eventsCsv;  // events + verdicts CSV, written atomically
     StateFileOptions file;
     ClassifyOptions tolerance;
 };
@@ -31,7 +40,40 @@ struct Run {
     bool isoTime = false;
 };
 
+// A process log whose columns are named by role (product_T, chamber_P, timestamp...): the
+// run-log reader of core/run guesses the columns and units (docs/runs.md).
+Run readProcessLog(const PathArgs &a, Io &io) {
+    run::RunLogOptions o;
+    if (a.tUnit) o.temperatureUnit = parseTemperatureUnit(*a.tUnit);
+    if (a.pUnit) o.pressureUnit = parsePressureUnit(*a.pUnit);
+    run::RunLog log = run::readRunLogFile(a.file.input, o);
+    for (const std::string &note : log.layout.notes) io.err << "note: " << note << '\n';
+    Run run;
+    run.states = std::move(log.states);
+    for (std::size_t i = 0; i < run.states.size(); ++i) run.rows.push_back(long(i) + 2);
+    return run;
+}
+
+bool explicitColumns(const PathArgs &a) {
+    return !a.file.columns.tColumn.empty() || !a.file.columns.pColumn.empty();
+}
+
 Run readRun(const PathArgs &a, Io &io, const std::string &name) {
+    if (a.file.input != "-" && !explicitColumns(a)) {
+        std::ifstream probe(a.file.input);
+        std::string header;
+        std::getline(probe, header);
+        try {
+            std::istringstream line(header + "\n");
+            csv::Reader r(line, name, readerOptions(a.file));
+            csv::StateColumnOptions columns = a.file.columns;
+            columns.tUnit = a.tUnit;
+            columns.pUnit = a.pUnit;
+            (void)csv::resolveStateColumns(r.header(), columns, name);
+        } catch (const InputError &) {
+            return readProcessLog(a, io);
+        }
+    }
     InputFile input(a.file.input, io.in);
     csv::Reader reader(input.stream(), name, readerOptions(a.file));
     csv::StateColumnOptions columns = a.file.columns;
@@ -134,11 +176,21 @@ void runPath(const PathArgs &a, Io &io) {
     const auto diagram = loadSubstance(a.substance, io.err);
     const std::string name = a.file.input == "-" ? "<stdin>" : a.file.input;
     const Run run = readRun(a, io, name);
-    const PathResult r = analysePath(*diagram, run.states, a.tolerance);
-    if (a.json)
-        io.out << toJson(r, run, diagram->substance().id).dump(2) << '\n';
-    else
+    std::optional<run::RuleSet> rules;
+    if (!a.rules.empty()) rules = run::readRulesFile(a.rules);
+    const run::RunAnalysis analysis =
+        run::analyseStates(*diagram, run.states, rules ? &*rules : nullptr, a.tolerance);
+    const PathResult &r = analysis.path;
+    if (a.json) {
+        nlohmann::json j = toJson(r, run, diagram->substance().id);
+        if (rules) j["verdicts"] = nlohmann::json::parse(run::verdictsJson(analysis.verdicts));
+        io.out << j.dump(2) << '\n';
+    } else {
         printText(r, run, io.out);
+        if (rules) io.out << run::verdictsText(analysis.verdicts);
+    }
+    if (!a.eventsCsv.empty()) run::writeEventsAndVerdictsCsv(a.eventsCsv, r, analysis.verdicts);
+    if (rules && !run::allPassed(analysis.verdicts)) throw RulesFailed();
 }
 
 }  // namespace
@@ -153,6 +205,10 @@ void addPathCommand(CLI::App &app, Io &io) {
     cmd->add_option("--t-unit", a->tUnit, "temperature unit (when the header has none)");
     cmd->add_option("--p-unit", a->pUnit, "pressure unit (when the header has none)");
     cmd->add_flag("--json", a->json, "print JSON");
+    cmd->add_option("--rules", a->rules,
+                    "rule file to check the run against (docs/runs.md); exit 3 when a rule fails");
+    cmd->add_option("--events-csv", a->eventsCsv,
+                    "write the events and rule verdicts to this CSV (atomic)");
     addStateFileOptions(cmd, a->file, true);
     addToleranceOptions(cmd, a->tolerance);
     cmd->callback([a, &io] { runPath(*a, io); });
