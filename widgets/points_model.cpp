@@ -74,7 +74,9 @@ const Classification &PointsModel::classification(int row) const {
 }
 
 int PointsModel::rowCount(const QModelIndex &parent) const {
-    return parent.isValid() ? 0 : doc_.pointCount();
+    // The model's own rows (the classification cache), not the document's: the document has
+    // already changed when it signals, and the rows may change only inside begin/end*Rows.
+    return parent.isValid() ? 0 : static_cast<int>(cache_.size());
 }
 int PointsModel::columnCount(const QModelIndex &parent) const {
     return parent.isValid() ? 0 : Count;
@@ -117,7 +119,10 @@ QString PointsModel::tooltip(int row) const {
 }
 
 QVariant PointsModel::data(const QModelIndex &index, int role) const {
-    if (!index.isValid() || index.row() >= rowCount()) return {};
+    // A view may ask while the document and the cache are between a change and its signal
+    // (e.g. during beginRemoveRows): answer only rows both still hold.
+    if (!index.isValid() || index.row() >= rowCount() || index.row() >= doc_.pointCount())
+        return {};
     const int row = index.row(), col = index.column();
     switch (role) {
         case Qt::DisplayRole:
