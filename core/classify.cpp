@@ -94,8 +94,9 @@ Classifier::Classifier(const PhaseDiagram &diagram, ClassifyOptions options)
         TRange r = b->validity.valid() ? b->validity : b->model->domain();
         const double p1 = b->model->pressure(r.min_K);
         const double p2 = b->model->pressure(r.max_K);
-        segments_.push_back({b, std::min(p1, p2), std::max(p1, p2), r.min_K});
+        segments_.push_back({b, std::min(p1, p2), std::max(p1, p2), r.min_K, r.max_K});
     }
+    findMeltCeiling();
     const auto &tps = diagram.substance().triplePoints;
     for (std::size_t i = 1; i < tps.size(); ++i)
         if (!std::isfinite(lowestSolidSolidLiquid_Pa) || tps[i].P_Pa < lowestSolidSolidLiquid_Pa)
@@ -109,6 +110,19 @@ Classifier::Classifier(const PhaseDiagram &diagram, ClassifyOptions options)
     else
         vaporSolidForm_ = "solid";
     for (const Boundary &b : diagram.substance().boundaries) labels_.emplace_back(&b, b.label());
+}
+
+// The ceiling holds when one melting segment covers every pressure from pt to pc: no gap, no
+// extrapolation past a segment's end, so the melting temperature there stays within that
+// segment's temperatures (a pressure below the first segment has no melting temperature).
+void Classifier::findMeltCeiling() {
+    if (!std::isfinite(pt_) || !std::isfinite(pc_)) return;
+    for (const Segment &s : segments_)
+        if (s.pLow <= pt_ && s.pHigh >= pc_) {
+            meltCeilingBelowPc_ = s.tHigh;
+            return;
+        }
+    if (!segments_.empty() && segments_.front().pLow >= pc_) meltCeilingBelowPc_ = 0.0;
 }
 
 std::string_view Classifier::labelOf(const Boundary *b) const {
@@ -218,7 +232,11 @@ ClassificationView Classifier::view(double T, double P) const {
         fillMargins(c, T, P, {&k, 1});
         return c;
     }
-    const OptValue melt = diagram_->meltingTemperature(P);
+    // A fluid point at pt < p < pc that is warmer than any melting temperature there is
+    // vapor or liquid: the melting curve is looked up only when needed.
+    const bool meltLooked = !(P < pc_ && T >= meltCeilingBelowPc_);
+    OptValue melt;
+    if (meltLooked) melt = diagram_->meltingTemperature(P);
     if (melt && T < melt->value) {
         const Candidate k = fromValue(melt);
         c.phase = Phase::Solid;
@@ -226,22 +244,29 @@ ClassificationView Classifier::view(double T, double P) const {
         fillMargins(c, T, P, {&k, 1});
         return c;
     }
-    if (P < pc_) {
-        const OptValue vap = diagram_->vaporizationTemperature(P);
-        if (!vap) return unknown(fmt::format("no vaporization curve at {} Pa", P));
-        const Candidate k[2] = {fromValue(vap), fromValue(melt)};
-        if (T >= vap->value) {
-            c.phase = Phase::Vapor;
-            fillMargins(c, T, P, {k, 1});
-            return c;
-        }
-        if (!melt)
-            return unknown(fmt::format("no melting curve at {} Pa: solid or liquid not known", P));
-        c.phase = Phase::Liquid;
-        fillMargins(c, T, P, k);
+    if (P < pc_) return belowPc(T, P, melt, meltLooked);
+    return abovePc(T, P, melt);
+}
+
+// pt < p < pc, not solid: vapor (margin to vaporization) or liquid (margins to vaporization
+// and melting).
+ClassificationView Classifier::belowPc(double T, double P, OptValue melt, bool meltLooked) const {
+    const OptValue vap = diagram_->vaporizationTemperature(P);
+    if (!vap) return unknown(fmt::format("no vaporization curve at {} Pa", P));
+    ClassificationView c;
+    if (T >= vap->value) {
+        const Candidate k = fromValue(vap);
+        c.phase = Phase::Vapor;
+        fillMargins(c, T, P, {&k, 1});
         return c;
     }
-    return abovePc(T, P, melt);
+    if (!meltLooked) melt = diagram_->meltingTemperature(P);
+    if (!melt)
+        return unknown(fmt::format("no melting curve at {} Pa: solid or liquid not known", P));
+    const Candidate k[2] = {fromValue(vap), fromValue(melt)};
+    c.phase = Phase::Liquid;
+    fillMargins(c, T, P, k);
+    return c;
 }
 
 // p >= pc, not solid: compressed liquid (margins to melting or the critical point) or

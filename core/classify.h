@@ -9,6 +9,7 @@
 // Margins: dT_K = T - T_boundary(p), dP_Pa = p - p_boundary(T) for the nearest boundary of
 // the point's region (NaN where that boundary does not exist at that T or p). For gas and
 // supercritical points the reference is the critical point (dT = T - Tc, dP = p - pc).
+#include <limits>
 #include <optional>
 #include <span>
 #include <string>
@@ -73,12 +74,16 @@ public:
     // The same classification as operator(), texts as views (see ClassificationView).
     ClassificationView view(double T_K, double P_Pa) const;
     const PhaseDiagram &diagram() const { return *diagram_; }
+    // No melting temperature at pressures between pt and pc reaches this temperature (+inf
+    // when no such bound is known); points there at least this warm skip the melting lookup.
+    double meltCeilingBelowPc() const { return meltCeilingBelowPc_; }
 
 private:
     struct Segment {
         const Boundary *boundary = nullptr;
         double pLow = kNaN, pHigh = kNaN;  // pressures at the segment's ends
         double tLow = kNaN;                // lower of the segment's end temperatures
+        double tHigh = kNaN;               // higher of them
     };
     // A boundary bounding the point's region and its temperature at the point's pressure
     // (boundary null: the critical point).
@@ -94,12 +99,18 @@ private:
     void fillMargins(ClassificationView &c, double T, double P,
                      std::span<const Candidate> candidates) const;
     ClassificationView abovePc(double T, double P, const std::optional<BoundaryValue> &melt) const;
+    ClassificationView belowPc(double T, double P, std::optional<BoundaryValue> melt,
+                               bool meltLooked) const;
+    void findMeltCeiling();
 
     const PhaseDiagram *diagram_;
     ClassifyOptions options_;
     double Tt_ = kNaN, pt_ = kNaN, Tc_ = kNaN, pc_ = kNaN;
     std::vector<Segment> segments_;  // melting segments by increasing pressure
     double lowestSolidSolidLiquid_Pa = kNaN;
+    // No melting temperature at pressures in (pt, pc) reaches this: fluid points there that
+    // are at least this warm need no melting lookup to rule out the solid (+inf: unknown).
+    double meltCeilingBelowPc_ = std::numeric_limits<double>::infinity();
     std::string vaporSolidForm_;  // the solid that borders the vapor ("ice Ih", "solid")
     std::vector<std::pair<const Boundary *, std::string>> labels_;  // Boundary::label() once
 };

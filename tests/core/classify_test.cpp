@@ -10,6 +10,7 @@
 #include <string>
 
 #include "core/errors.h"
+#include "core/library.h"
 #include "models/reference_specs.h"
 
 namespace pw {
@@ -258,6 +259,29 @@ TEST(ClassifyMissingData, UnknownWithAReasonNeverAGuess) {
     EXPECT_EQ(classify(d, 260.0, 2e6).phase, Phase::Vapor);     // above T_vap: vapor regardless
     EXPECT_EQ(classify(d, 350.0, 20e6).phase, Phase::Unknown);  // above pc: no melting data
     EXPECT_EQ(toString(Phase::Unknown), "unknown");
+}
+
+// The melting lookup is skipped for points at pt < p < pc at least as warm as the ceiling;
+// that is exact only if no melting temperature there reaches it. Checked on every bundled
+// substance at 2000 pressures (water's whole grid is also checked against python3-iapws by
+// water_margins_check.py).
+TEST(ClassifyMeltCeiling, NoMeltingTemperatureBetweenPtAndPcReachesIt) {
+    const SubstanceLibrary library = SubstanceLibrary::bundled();
+    for (const auto &d : library.all()) {
+        SCOPED_TRACE(d->substance().id);
+        const double ceiling = Classifier(*d).meltCeilingBelowPc();
+        if (!d->triplePoint() || !d->criticalPoint()) continue;
+        const double pt = d->triplePoint()->P_Pa, pc = d->criticalPoint()->P_Pa;
+        for (int i = 1; i < 2000; ++i) {
+            const double p = pt * std::pow(pc / pt, i / 2000.0);
+            const auto melt = d->meltingTemperature(p);
+            if (!melt) continue;
+            ASSERT_LE(melt->value, ceiling) << p << " Pa";
+        }
+    }
+    // Water: the ice Ih melting curve falls from the triple point, 273.16 K (IAPWS R14-08).
+    const auto water = library.find("water");
+    EXPECT_NEAR(Classifier(*water).meltCeilingBelowPc(), 273.16, 1e-9);
 }
 
 }  // namespace
