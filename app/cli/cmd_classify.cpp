@@ -2,10 +2,14 @@
 // with the margins to the nearest boundary (docs/classification.md).
 #include <fmt/format.h>
 
+#include <algorithm>
 #include <memory>
 #include <nlohmann/json.hpp>
 #include <optional>
 #include <ostream>
+#include <string>
+#include <thread>
+#include <vector>
 
 #include "app/cli/atomic_output.h"
 #include "app/cli/cli.h"
@@ -14,6 +18,7 @@
 #include "core/classify.h"
 #include "core/csv/writer.h"
 #include "core/errors.h"
+#include "core/ordered_pipeline.h"
 #include "core/units.h"
 
 namespace pw::cli {
@@ -27,6 +32,7 @@ struct ClassifyArgs {
     std::string output = "-";
     StateFileOptions file;
     ClassifyOptions tolerance;
+    int threads = 0;  // 0: one per core
 };
 
 nlohmann::json number(double v) { return std::isfinite(v) ? nlohmann::json(v) : nlohmann::json(); }
@@ -85,6 +91,48 @@ void writeRow(csv::Writer &w, std::string_view record, const ClassificationView 
     w.endRow();
 }
 
+// Rows travel in blocks: the reading thread parses them, worker threads classify and format
+// them, the reading thread writes the finished blocks in input order (core/ordered_pipeline.h).
+struct RowBlock {
+    std::string records;            // the input records, back to back
+    std::vector<std::size_t> ends;  // where each record ends in `records`
+    std::vector<double> T, P;       // kelvin, pascal
+    csv::Writer text;               // the output rows
+
+    explicit RowBlock(char delimiter) : text(delimiter) {}
+    std::size_t size() const { return ends.size(); }
+    void add(std::string_view record, const RowState &s) {
+        records.append(record);
+        ends.push_back(records.size());
+        T.push_back(s.T_K);
+        P.push_back(s.P_Pa);
+    }
+    void clear() {
+        records.clear();
+        ends.clear();
+        T.clear();
+        P.clear();
+        text.clear();
+    }
+};
+
+constexpr std::size_t kBlockRows = 4096;
+
+unsigned workerThreads(int threads) {
+    const unsigned n = threads > 0 ? static_cast<unsigned>(threads)
+                                   : std::max(1u, std::thread::hardware_concurrency());
+    return n == 1 ? 0 : n;
+}
+
+void classifyBlock(const Classifier &classifier, RowBlock &b) {
+    std::size_t start = 0;
+    const std::string_view all(b.records);
+    for (std::size_t i = 0; i < b.size(); ++i) {
+        writeRow(b.text, all.substr(start, b.ends[i] - start), classifier.view(b.T[i], b.P[i]));
+        start = b.ends[i];
+    }
+}
+
 void classifyFile(const ClassifyArgs &a, Io &io) {
     const auto diagram = loadSubstance(a.substance, io.err);
     const Classifier classifier(*diagram, a.tolerance);
@@ -97,25 +145,46 @@ void classifyFile(const ClassifyArgs &a, Io &io) {
     const csv::StateColumns cols = csv::resolveStateColumns(reader.header(), columns, name);
 
     AtomicOutput out(a.output, io.out);
-    csv::Writer w(out.stream(), reader.delimiter());
-    w.raw(reader.headerRecord());
-    for (const char *h :
-         {"phase", "solid_form", "nearest_boundary", "dT_K", "dP_Pa", "on_boundary", "flags"})
-        w.field(h);
-    w.endRow();
-    long bad = 0;
+    {
+        csv::Writer w(out.stream(), reader.delimiter());
+        w.raw(reader.headerRecord());
+        for (const char *h :
+             {"phase", "solid_form", "nearest_boundary", "dT_K", "dP_Pa", "on_boundary", "flags"})
+            w.field(h);
+        w.endRow();
+        w.flush();
+    }
+    const unsigned workers = workerThreads(a.threads);
+    OrderedPipeline<RowBlock> pipeline(
+        workers, 2 * workers + 2, [&] { return RowBlock(reader.delimiter()); },
+        [&](RowBlock &b) { classifyBlock(classifier, b); },
+        [&](RowBlock &b) {
+            out.stream().write(b.text.text().data(),
+                               static_cast<std::streamsize>(b.text.text().size()));
+            b.clear();
+        });
+    long bad = 0, rows = 0;
+    RowBlock *block = &pipeline.next();
     for (;;) {
         try {
             if (!reader.next()) break;
-            const RowState s = readState(reader, cols, a.file.decimalComma);
-            writeRow(w, reader.record(), classifier.view(s.T_K, s.P_Pa));
+            ++rows;
+            block->add(reader.record(), readState(reader, cols, a.file.decimalComma));
         } catch (const InputError &e) {
             if (!a.file.skipBad) throw;
             ++bad;
             io.err << "skipped: " << e.what() << '\n';
+            continue;
+        }
+        if (block->size() == kBlockRows) {
+            pipeline.submit();
+            block = &pipeline.next();
         }
     }
-    w.flush();
+    if (rows == 0 && bad == 0)
+        throw InputError(name, 2, "", "the file has a header but no data rows");
+    pipeline.submit();
+    pipeline.finish();
     out.commit();
     if (bad > 0) io.err << badRowSummary(bad, name) << '\n';
 }
@@ -142,6 +211,12 @@ void addClassifyCommand(CLI::App &app, Io &io) {
     outOpt->needs(in);
     addStateFileOptions(cmd, a->file, false);
     addToleranceOptions(cmd, a->tolerance);
+    cmd->add_option("--threads", a->threads,
+                    "CSV input: threads for classifying and formatting (0: one per core; 1: "
+                    "all in one thread); the output is the same for any number")
+        ->capture_default_str()
+        ->check(CLI::NonNegativeNumber)
+        ->needs(in);
     cmd->callback([a, &io] {
         if (a->file.input.empty())
             classifyPoint(*a, io);

@@ -15,12 +15,20 @@ constexpr std::size_t kNumberBytes = 32;
 }  // namespace
 
 Writer::Writer(std::ostream &out, char delimiter, std::size_t bufferBytes)
-    : out_(out),
+    : out_(&out),
       delimiter_(delimiter),
       limit_(bufferBytes),
       data_(std::make_unique<char[]>(bufferBytes + kSlack)),
       pos_(data_.get()),
       end_(data_.get() + bufferBytes + kSlack) {}
+
+Writer::Writer(char delimiter)
+    : out_(nullptr),
+      delimiter_(delimiter),
+      limit_(std::size_t{1} << 16),
+      data_(std::make_unique<char[]>(limit_ + kSlack)),
+      pos_(data_.get()),
+      end_(data_.get() + limit_ + kSlack) {}
 
 void Writer::grow(std::size_t bytes) {
     const std::size_t used = size();
@@ -50,10 +58,11 @@ void Writer::field(double value) {
 }
 
 void Writer::flush() {
-    if (size() > 0) out_.write(data_.get(), static_cast<std::streamsize>(size()));
+    if (out_ == nullptr) return;
+    if (size() > 0) out_->write(data_.get(), static_cast<std::streamsize>(size()));
     pos_ = data_.get();
-    out_.flush();
-    if (!out_) throw Error("writing the output failed (disk full or the stream was closed?)");
+    out_->flush();
+    if (!*out_) throw Error("writing the output failed (disk full or the stream was closed?)");
 }
 
 }  // namespace pw::csv

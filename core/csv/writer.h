@@ -15,8 +15,12 @@ class Writer {
 public:
     explicit Writer(std::ostream &out, char delimiter = ',',
                     std::size_t bufferBytes = std::size_t{1} << 20);
+    // A writer into memory only: rows collect in the buffer (text()) until clear().
+    explicit Writer(char delimiter);
+    Writer(Writer &&) noexcept = default;
     Writer(const Writer &) = delete;
     Writer &operator=(const Writer &) = delete;
+    Writer &operator=(Writer &&) noexcept = default;
     ~Writer() = default;  // does not flush: call flush() and let it throw
 
     char delimiter() const { return delimiter_; }
@@ -38,10 +42,17 @@ public:
     void endRow() {
         put('\n');
         rowStart_ = true;
-        if (size() >= limit_) flush();
+        if (out_ != nullptr && size() >= limit_) flush();
     }
-    // Writes the buffer to the stream; throws pw::Error when the stream has failed.
+    // Writes the buffer to the stream; throws pw::Error when the stream has failed. A memory
+    // writer keeps its text.
     void flush();
+    // The rows written and not yet flushed; clear() forgets them.
+    std::string_view text() const { return {data_.get(), size()}; }
+    void clear() {
+        pos_ = data_.get();
+        rowStart_ = true;
+    }
 
 private:
     std::size_t size() const { return static_cast<std::size_t>(pos_ - data_.get()); }
@@ -68,7 +79,7 @@ private:
     void putQuoted(std::string_view text);
     void grow(std::size_t bytes);  // room for `bytes` more (a row longer than the buffer)
 
-    std::ostream &out_;
+    std::ostream *out_;  // null: a memory writer
     char delimiter_;
     std::size_t limit_;
     std::unique_ptr<char[]> data_;

@@ -4,6 +4,7 @@
 #include <gtest/gtest.h>
 #include <unistd.h>
 
+#include <algorithm>
 #include <filesystem>
 #include <fstream>
 #include <nlohmann/json.hpp>
@@ -93,6 +94,59 @@ TEST_F(CliClassify, SkipBadWritesGoodRowsAndCounts) {
     int lines = 0;
     while (std::getline(f, line)) ++lines;
     EXPECT_EQ(lines, 3);  // header + 2 good rows
+}
+
+// Rows travel in blocks of 4096 through worker threads; the output and the messages must not
+// depend on the number of threads. 20 000 water states with a bad row every 3 000 rows.
+TEST_F(CliClassify, ThreadsGiveTheSameOutputAndMessages) {
+    std::string text = "T [K],P [Pa]\n";
+    for (int i = 0; i < 20000; ++i) {
+        if (i % 3000 == 1500) {
+            text += "300,broken\n";
+            continue;
+        }
+        text += std::to_string(200.0 + 0.025 * i) + "," + std::to_string(1.0 + 50.0 * i) + "\n";
+    }
+    const std::string in = file("many.csv", text);
+    std::vector<std::string> outputs, messages;
+    for (const char *threads : {"1", "2", "5"}) {
+        const Result r = runCli({"classify", "--substance", "water", "--input", in, "--skip-bad",
+                                 "--threads", threads});
+        ASSERT_EQ(r.code, kExitOk) << r.err;
+        outputs.push_back(r.out);
+        messages.push_back(r.err);
+    }
+    EXPECT_EQ(std::count(outputs[0].begin(), outputs[0].end(), '\n'), 1 + 20000 - 7);
+    EXPECT_NE(messages[0].find("row 1502"),
+              std::string::npos);  // data row 1500: line 1502 (the header is row 1)
+    EXPECT_NE(messages[0].find("7 bad rows skipped"), std::string::npos);
+    for (std::size_t k = 1; k < outputs.size(); ++k) {
+        EXPECT_EQ(outputs[k], outputs[0]) << "threads differ";
+        EXPECT_EQ(messages[k], messages[0]);
+    }
+}
+
+TEST_F(CliClassify, BadRowAfterManyBlocksLeavesNoFile) {
+    std::string text = "T,P\n";
+    for (int i = 0; i < 30000; ++i) text += "300,1e5\n";
+    text += "300,-2\n";
+    const std::string in = file("late.csv", text);
+    const std::string out = (dir_ / "out.csv").string();
+    const Result r = runCli(
+        {"classify", "--substance", "water", "--input", in, "--output", out, "--threads", "3"});
+    EXPECT_EQ(r.code, kExitBadInput);
+    EXPECT_NE(r.err.find("row 30002"), std::string::npos) << r.err;
+    EXPECT_FALSE(fs::exists(out));
+    EXPECT_EQ(filesInDir(), 1u);
+}
+
+TEST_F(CliClassify, HeaderOnlyIsAnErrorWithNoOutput) {
+    const std::string in = file("empty.csv", "T,P\n");
+    const std::string out = (dir_ / "out.csv").string();
+    const Result r = runCli({"classify", "--substance", "water", "--input", in, "--output", out});
+    EXPECT_EQ(r.code, kExitBadInput);
+    EXPECT_NE(r.err.find("no data rows"), std::string::npos) << r.err;
+    EXPECT_FALSE(fs::exists(out));
 }
 
 TEST_F(CliClassify, BoundaryJsonAtPressure) {

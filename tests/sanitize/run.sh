@@ -2,7 +2,8 @@
 # The sanitizer build: core, the CLI and their tests with AddressSanitizer and
 # UndefinedBehaviorSanitizer (PW_SANITIZE, cmake/Warnings.cmake), without the GUI, then its
 # whole ctest (core and CLI tests, CLI checks, seed-corpus replays). Any sanitizer report
-# aborts the test that caused it (-fno-sanitize-recover=all).
+# aborts the test that caused it (-fno-sanitize-recover=all). Then the ordered pipeline's
+# test under ThreadSanitizer.
 #   tests/sanitize/run.sh [ctest arguments...]
 # With clang installed this is the same build folder as tests/fuzz/run-fuzzers.sh (clang,
 # PW_FUZZ=ON, which sanitizes the whole build), so the core is compiled once for both;
@@ -31,3 +32,9 @@ say "running the test suite under ASan + UBSan"
 export ASAN_OPTIONS=${ASAN_OPTIONS:-detect_leaks=1:abort_on_error=1}
 export UBSAN_OPTIONS=${UBSAN_OPTIONS:-print_stacktrace=1:halt_on_error=1}
 ctest --test-dir "$build" --output-on-failure -j "$jobs" "$@"
+# The classify command's worker threads go through core/ordered_pipeline.h (header only): its
+# test under ThreadSanitizer catches data races there without a third full build.
+say "ThreadSanitizer: the ordered pipeline's test"
+g++ -std=c++20 -O1 -g -fsanitize=thread -I. tests/core/ordered_pipeline_test.cpp -lgtest \
+    -lgtest_main -pthread -o "$build/ordered_pipeline_tsan"
+TSAN_OPTIONS=halt_on_error=1 "$build/ordered_pipeline_tsan" --gtest_brief=1
