@@ -75,17 +75,27 @@ QString mergeLabels(const QStringList &labels) {
     return out.join(QStringLiteral(", "));
 }
 
+// "IAPWS; W. Wagner, ..." names the issuing body before the ';' (a release is cited by it).
+QString issuingBody(const QString &authors) {
+    const QString head = authors.section(QLatin1Char(';'), 0, 0).trimmed();
+    if (!authors.contains(QLatin1Char(';')) || head.contains(QLatin1Char('.'))) return {};
+    return head;
+}
+
+// "Surname", "One & Two" or "One et al." from an author list.
+QString authorsShort(const QStringList &authors) {
+    if (authors.size() == 1) return authors.front().trimmed();
+    if (authors.size() == 2)
+        return surname(authors[0]) + QStringLiteral(" & ") + surname(authors[1]);
+    if (authors.size() > 2) return surname(authors[0]) + QStringLiteral(" et al.");
+    return {};
+}
+
 }  // namespace
 
 QString shortCitation(const Citation &c) {
-    const QStringList authors = authorList(q(c.authors));
-    QString who;
-    if (authors.size() == 1)
-        who = authors.front().trimmed();
-    else if (authors.size() == 2)
-        who = surname(authors[0]) + QStringLiteral(" & ") + surname(authors[1]);
-    else if (authors.size() > 2)
-        who = surname(authors[0]) + QStringLiteral(" et al.");
+    QString who = issuingBody(q(c.authors));
+    if (who.isEmpty()) who = authorsShort(authorList(q(c.authors)));
     QString text = who;
     if (c.year > 0) text += QStringLiteral(" (%1)").arg(c.year);
     // The publication up to its first ';' (later parts are adoption notes and the like).

@@ -179,6 +179,10 @@ TEST_F(FigureExport, CaptionNamesSourcesAndModels) {
               QStringLiteral("Span & Wagner (1996), J. Phys. Chem. Ref. Data 25, 1509"));
     c.authors = "A. One, B. Two, C. Three";
     EXPECT_TRUE(shortCitation(c).startsWith(QStringLiteral("One et al. (1996)")));
+    c.authors = "IAPWS; W. Wagner, T. Riethmann, R. Feistel, A. H. Harvey";  // a release
+    c.year = 2011;
+    c.publication = "IAPWS R14-08(2011)";
+    EXPECT_EQ(shortCitation(c), QStringLiteral("IAPWS (2011), IAPWS R14-08(2011)"));
 }
 
 }  // namespace
