@@ -10,7 +10,7 @@ namespace pw {
 namespace {
 
 constexpr int kNoQuarter = std::numeric_limits<int>::min();
-constexpr int kGridPoints = 2048;  // per side of the anchor, for the domain scan
+constexpr int kGridPoints = 512;  // per side of the anchor, for the domain scan
 
 double ipow(double x, int n) {
     if (n < 0) return 1.0 / ipow(x, -n);
