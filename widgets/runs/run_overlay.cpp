@@ -71,6 +71,7 @@ RunOverlay::RunOverlay(DiagramWidget &diagram, Settings &settings, QObject *pare
 void RunOverlay::setRun(RunPtr run) {
     run_ = std::move(run);
     marker_ = {};
+    removeScale();
     diagram_.rebuild();  // clears the old overlay; ensureDrawn adds the new one
 }
 
@@ -132,44 +133,52 @@ void RunOverlay::drawMarks() {
         label(plot, plotX(e.T_K, u), plotY(e.P_Pa, u),
               QStringLiteral("%1 · %2").arg(
                   QString::fromStdString(std::string(toString(e.transition))), hoursText(e.time_s)),
-              eventColour, Qt::AlignLeft | Qt::AlignVCenter);
+              eventColour, Qt::AlignLeft | Qt::AlignTop)
+            ->setBrush(QColor(255, 255, 255, 215));  // below-right: point labels sit above-right
     }
     markerGraph_ = scatterGraph(plot, QCPScatterStyle::ssCrossCircle, QColor(0x55, 0x22, 0x88),
                                 QColor(255, 255, 255, 160), 16);
     sentinel_ = start;
 }
 
+// The time key of the path colours: a colour bar under the diagram, in its own layout row so
+// that it never covers a region, label or point.
 void RunOverlay::drawScale() {
     QCustomPlot &plot = *diagram_.plot();
-    QImage bar(120, 10, QImage::Format_RGB32);
-    for (int x = 0; x < bar.width(); ++x) {
-        const QColor c = timeColour(x / double(bar.width() - 1));
-        for (int y = 0; y < bar.height(); ++y) bar.setPixelColor(x, y, c);
-    }
-    auto *pix = new QCPItemPixmap(&plot);
-    pix->setPixmap(QPixmap::fromImage(bar));
-    pix->topLeft->setType(QCPItemPosition::ptAxisRectRatio);
-    pix->topLeft->setCoords(0.02, 0.035);
-    pix->setScaled(false);
-    pix->setClipToAxisRect(true);
-    pix->setSelectable(false);
-    const QColor text(0x20, 0x20, 0x28);
-    auto addText = [&](const QString &s, double x, Qt::Alignment align) {
-        auto *t = new QCPItemText(&plot);
-        t->position->setParentAnchor(pix->topLeft);
-        t->position->setType(QCPItemPosition::ptAbsolute);
-        t->position->setCoords(x, 5);
-        t->setPositionAlignment(align);
-        t->setText(s);
-        t->setColor(text);
-        t->setPadding(QMargins(4, 0, 4, 0));
-        t->setSelectable(false);
-        return t;
-    };
-    addText(tr("run %1").arg(run_->title), 0, Qt::AlignLeft | Qt::AlignBottom)
-        ->position->setCoords(0, -2);
-    addText(tr("0"), 0, Qt::AlignRight | Qt::AlignVCenter);
-    addText(hoursText(run_->states.back().time_s), 120, Qt::AlignLeft | Qt::AlignVCenter);
+    removeScale();
+    QCPColorGradient gradient;
+    QMap<double, QColor> stops;
+    for (int k = 0; k <= 3; ++k) stops.insert(k / 3.0, timeColour(k / 3.0));
+    gradient.setColorStops(stops);
+    gradient.setColorInterpolation(QCPColorGradient::ciRGB);
+    scale_ = new QCPColorScale(&plot);
+    scale_->setType(QCPAxis::atBottom);
+    scale_->setGradient(gradient);
+    scale_->setBarWidth(7);
+    scale_->setRangeDrag(false);
+    scale_->setRangeZoom(false);
+    const double end_s = run_->states.back().time_s;
+    const bool hours = end_s >= 3 * 3600.0;
+    scale_->setDataRange(QCPRange(0.0, end_s / (hours ? 3600.0 : 60.0)));
+    scale_->axis()->setLabel(
+        tr("run %1: path colour = time [%2]").arg(run_->title, hours ? tr("h") : tr("min")));
+    scale_->axis()->setLabelColor(plot.xAxis->labelColor());
+    scale_->axis()->setTickLabelColor(plot.xAxis->tickLabelColor());
+    auto *layout = plot.plotLayout();
+    layout->addElement(layout->rowCount(), 0, scale_);
+    layout->setRowStretchFactor(layout->rowCount() - 1, 0.001);
+    // Line the bar up with the diagram's axis rect.
+    auto *group = new QCPMarginGroup(&plot);
+    plot.axisRect()->setMarginGroup(QCP::msLeft | QCP::msRight, group);
+    scale_->setMarginGroup(QCP::msLeft | QCP::msRight, group);
+}
+
+void RunOverlay::removeScale() {
+    if (!scale_) return;
+    QCustomPlot &plot = *diagram_.plot();
+    plot.axisRect()->setMarginGroup(QCP::msLeft | QCP::msRight, nullptr);
+    plot.plotLayout()->remove(scale_);
+    plot.plotLayout()->simplify();
 }
 
 bool RunOverlay::markerVisible() const {

@@ -11,6 +11,7 @@
 #include "widgets/runs/run_data.h"
 #include "widgets/settings.h"
 
+class QCPColorScale;
 class QCPGraph;
 class QMouseEvent;
 
@@ -49,6 +50,7 @@ private:
     void drawPath();
     void drawMarks();
     void drawScale();
+    void removeScale();
     void placeMarker();
     void onMouseMove(QMouseEvent *event);
 
@@ -58,6 +60,7 @@ private:
     State marker_;
     QPointer<QCPGraph> sentinel_;  // cleared by renderScene -> redraw
     QPointer<QCPGraph> markerGraph_;
+    QPointer<QCPColorScale> scale_;  // the time key, a layout row under the diagram
     bool hovering_ = false;
 };
 

@@ -4,6 +4,7 @@
 
 #include <QMouseEvent>
 #include <QVBoxLayout>
+#include <algorithm>
 #include <cmath>
 
 #include "widgets/format.h"
@@ -16,16 +17,25 @@ namespace {
 // signed logarithmic scale, asinh(dP / 2 Pa) / ln 10, which is linear near 0 and log10 beyond.
 double signedLog(double dP_Pa) { return std::asinh(dP_Pa / 2.0) / std::log(10.0); }
 
-QSharedPointer<QCPAxisTickerText> signedLogTicker() {
+// Ticks at 0 and at +-10^k, every `stride` decades so that labels stay apart on a short axis.
+QSharedPointer<QCPAxisTickerText> signedLogTicker(int stride) {
     auto ticker = QSharedPointer<QCPAxisTickerText>::create();
     ticker->addTick(0.0, QStringLiteral("0"));
-    for (int k = 0; k <= 9; ++k) {
+    for (int k = stride > 1 ? stride : 0; k <= 9; k += std::max(1, stride)) {
         const double v = std::pow(10.0, k);
         const QString text = k == 0 ? QStringLiteral("1") : QStringLiteral("1e%1").arg(k);
         ticker->addTick(signedLog(v), text);
         ticker->addTick(signedLog(-v), QStringLiteral("−") + text);
     }
     return ticker;
+}
+
+// Decades between labels for `pixels` of axis showing `range` (in signed-log units, about one
+// unit per decade): labels at least 16 px apart.
+int decadeStride(double pixels, double range) {
+    if (!(pixels > 0.0) || !(range > 0.0)) return 1;
+    const double perDecade = pixels / range;
+    return std::clamp(static_cast<int>(std::ceil(16.0 / perDecade)), 1, 9);
 }
 
 QCPAxisRect *addRect(QCustomPlot *plot, int row) {
@@ -91,7 +101,8 @@ void TimeChart::build() {
     pAxis->setTicker(QSharedPointer<QCPAxisTickerLog>::create());
     pAxis->setNumberFormat(QStringLiteral("eb"));
     pAxis->setNumberPrecision(0);
-    bottom_->axis(QCPAxis::atRight)->setTicker(signedLogTicker());
+    bottom_->axis(QCPAxis::atRight)->setTicker(signedLogTicker(1));
+    connect(plot_, &QCustomPlot::beforeReplot, this, &TimeChart::updateMarginTicks);
     // The zero line of the margins: the boundary itself.
     auto *zero = new QCPItemStraightLine(plot_);
     zero->setClipAxisRect(bottom_);
@@ -113,9 +124,22 @@ void TimeChart::setUnits(const DisplayUnits &units) {
                                    units.temperature == TemperatureUnit::Rankine
                                ? QStringLiteral("°R")
                                : QStringLiteral("K");
-    bottom_->axis(QCPAxis::atLeft)->setLabel(tr("ΔT to boundary [%1]").arg(dTunit));
-    bottom_->axis(QCPAxis::atRight)->setLabel(tr("ΔP to boundary [Pa, signed log]"));
+    // Short labels: the margin row is low. The tooltip says what the row shows.
+    bottom_->axis(QCPAxis::atLeft)->setLabel(tr("ΔT [%1]").arg(dTunit));
+    bottom_->axis(QCPAxis::atRight)->setLabel(tr("ΔP [Pa]"));
+    plot_->setToolTip(
+        tr("Upper row: temperature and pressure of the run. Lower row: margins "
+           "to the nearest phase boundary, ΔT and ΔP (signed logarithmic scale); "
+           "0 is on the boundary. Drag to pan, wheel to zoom the time axis."));
     fill();
+}
+
+void TimeChart::updateMarginTicks() {
+    QCPAxis *axis = bottom_->axis(QCPAxis::atRight);
+    const int stride = decadeStride(axis->axisRect()->height(), axis->range().size());
+    if (stride == tickStride_) return;
+    tickStride_ = stride;
+    axis->setTicker(signedLogTicker(stride));
 }
 
 void TimeChart::setRun(RunPtr run) {

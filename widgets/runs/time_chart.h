@@ -49,6 +49,7 @@ protected:
 private:
     void build();
     void fill();
+    void updateMarginTicks();  // ΔP labels thinned to the axis height
 
     QCustomPlot *plot_;
     QCPAxisRect *top_ = nullptr;
@@ -59,6 +60,7 @@ private:
     DisplayUnits units_;
     double cursorTime_s_ = kNaN;
     double timeScale_s_ = 3600.0;  // seconds per axis unit
+    int tickStride_ = 1;           // decades between ΔP labels
 };
 
 }  // namespace pw::ui
