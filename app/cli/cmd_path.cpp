@@ -167,9 +167,13 @@ void printText(const PathResult &r, const Run &run, std::ostream &out) {
     out << "phases visited: " << phases << '\n';
     out << "crosses the liquid-vapor boundary: " << (r.summary.crossesLiquidVapor ? "yes" : "no")
         << '\n';
+    // A margin that does not exist there (dP of a melting line outside its range) reads "n/a".
+    auto value = [](double v, const char *unit) {
+        return std::isfinite(v) ? fmt::format("{:.4g} {}", v, unit) : std::string("n/a");
+    };
     for (const auto &[label, m] : r.summary.minMargins)
-        out << fmt::format("  closest to {}: |dT| = {:.4g} K, |dP| = {:.4g} Pa (row {})\n", label,
-                           m.minAbsDT_K, m.minAbsDP_Pa, run.rows[m.index]);
+        out << fmt::format("  closest to {}: |dT| = {}, |dP| = {} (row {})\n", label,
+                           value(m.minAbsDT_K, "K"), value(m.minAbsDP_Pa, "Pa"), run.rows[m.index]);
 }
 
 void runPath(const PathArgs &a, Io &io) {

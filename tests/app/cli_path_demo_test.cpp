@@ -58,6 +58,10 @@ TEST(CliPathDemo, Co2RunWritesEventsCsvAndPasses) {
     ASSERT_EQ(r.code, 0) << r.err;
     EXPECT_NE(r.out.find("enter_supercritical"), std::string::npos);
     EXPECT_NE(r.out.find("crosses the liquid-vapor boundary: no"), std::string::npos);
+    // Above the triple temperature the sublimation curve has no pressure: "n/a", never "nan".
+    EXPECT_NE(r.out.find("closest to sublimation: |dT| = 106.1 K, |dP| = n/a"), std::string::npos)
+        << r.out;
+    EXPECT_EQ(r.out.find("nan"), std::string::npos);
     std::ifstream in(csv);
     std::string header;
     std::getline(in, header);
