@@ -26,14 +26,13 @@ std::string_view delimiterName(char d) {
     return d == ',' ? "comma" : d == ';' ? "semicolon" : d == '\t' ? "tab" : "separator";
 }
 
-// A cell as quoted in a message: long cells (a runaway line) are cut to their first bytes.
-std::string shown(std::string_view cell) {
+}  // namespace
+
+std::string shownCell(std::string_view cell) {
     constexpr std::size_t kMax = 40;
     if (cell.size() <= kMax) return std::string(cell);
     return fmt::format("{}... ({} bytes)", cell.substr(0, kMax), cell.size());
 }
-
-}  // namespace
 
 std::optional<std::string> parseNumber(std::string_view cell, bool decimalComma, double &out) {
     std::string_view s = trim(cell);
@@ -46,24 +45,25 @@ std::optional<std::string> parseNumber(std::string_view cell, bool decimalComma,
             return fmt::format(
                 "'{}' contains '.' but the file was declared to use a decimal "
                 "comma (thousands separators are not accepted)",
-                shown(s));
-        if (digits.size() >= local.size()) return fmt::format("'{}' is not a number", shown(s));
+                shownCell(s));
+        if (digits.size() >= local.size()) return fmt::format("'{}' is not a number", shownCell(s));
         std::copy(digits.begin(), digits.end(), local.begin());
         std::replace(local.begin(), local.begin() + digits.size(), ',', '.');
         digits = std::string_view(local.data(), digits.size());
     }
     double v = 0.0;
     const auto [ptr, ec] = std::from_chars(digits.data(), digits.data() + digits.size(), v);
-    if (ec == std::errc::result_out_of_range) return fmt::format("'{}' is out of range", shown(s));
+    if (ec == std::errc::result_out_of_range)
+        return fmt::format("'{}' is out of range", shownCell(s));
     if (ec != std::errc() || ptr != digits.data() + digits.size()) {
         if (!decimalComma && s.find(',') != std::string_view::npos)
             return fmt::format(
                 "'{}' is not a number (if the file uses a decimal comma, declare "
                 "it: --decimal-comma)",
-                shown(s));
-        return fmt::format("'{}' is not a number", shown(s));
+                shownCell(s));
+        return fmt::format("'{}' is not a number", shownCell(s));
     }
-    if (!std::isfinite(v)) return fmt::format("'{}' is not a finite number", shown(s));
+    if (!std::isfinite(v)) return fmt::format("'{}' is not a finite number", shownCell(s));
     out = v;
     return std::nullopt;
 }

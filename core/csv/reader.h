@@ -27,6 +27,9 @@ struct ReaderOptions {
     std::size_t bufferBytes = std::size_t{1} << 20;
 };
 
+// A cell as quoted in a message: a long cell (a runaway line) is cut to its first 40 bytes.
+std::string shownCell(std::string_view cell);
+
 // Why a cell is not a number, or nullopt when it is one (value in `out`). Accepts an optional
 // sign, surrounding blanks, and exponents; refuses empty cells, inf and nan.
 std::optional<std::string> parseNumber(std::string_view cell, bool decimalComma, double &out);

@@ -47,7 +47,7 @@ RunLog readRunLog(std::istream &in, const std::string &file, const RunLogOptions
             const auto v = csv::parseIsoTime(reader.field(L.timeColumn));
             if (!v)
                 throw InputError(file, reader.row(), timeName,
-                                 "'" + std::string(reader.field(L.timeColumn)) +
+                                 "'" + csv::shownCell(reader.field(L.timeColumn)) +
                                      "' is not an ISO 8601 time (e.g. 2026-03-14T08:00:00Z)");
             t = *v;
         } else {

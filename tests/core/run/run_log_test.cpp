@@ -94,6 +94,18 @@ TEST(RunLog, EveryBadCellNamesFileRowAndColumn) {
     expectBad(head + "0,20,100\n", 1, "chamber", named);
 }
 
+TEST(RunLog, ARunawayTimestampCellIsShownCut) {
+    const std::string junk(1 << 20, 'x');  // a logger that lost its line ends
+    try {
+        read("timestamp,T [K],P [Pa]\n2026-03-14T08:00:00Z,250,10\n" + junk + ",250,10\n");
+        FAIL() << "no error";
+    } catch (const InputError &e) {
+        const std::string what = e.what();
+        EXPECT_LT(what.size(), 300u);
+        EXPECT_NE(what.find("(1048576 bytes)"), std::string::npos) << what;
+    }
+}
+
 TEST(RunLog, ReportsProgressAndHonoursCancel) {
     std::string text = "time [s],T [K],P [Pa]\n";
     for (int i = 0; i < 50000; ++i) text += std::to_string(i) + ",250,10\n";
