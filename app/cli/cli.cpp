@@ -25,6 +25,20 @@ void addCommands(CLI::App &app, Io &io) {
     (void)io;
 }
 
+// "phasewright-cli frobnicate": name the word and the commands (CLI11 would only say that a
+// subcommand is required).
+bool unknownCommand(const CLI::App &app, const std::vector<std::string> &args, Io &io) {
+    if (args.empty() || args.front().empty() || args.front().front() == '-') return false;
+    std::string names;
+    for (const CLI::App *sub : app.get_subcommands({})) {
+        if (sub->get_name() == args.front()) return false;
+        names += (names.empty() ? "" : ", ") + sub->get_name();
+    }
+    io.err << "phasewright-cli: unknown command '" << args.front() << "' (commands: " << names
+           << "; --help for more)\n";
+    return true;
+}
+
 }  // namespace
 
 int run(const std::vector<std::string> &args, Io io) {
@@ -37,6 +51,7 @@ int run(const std::vector<std::string> &args, Io io) {
     app.require_subcommand(1);
     app.fallthrough(false);
     addCommands(app, io);
+    if (unknownCommand(app, args, io)) return kExitUsage;
 
     std::vector<std::string> reversed(args.rbegin(), args.rend());
     try {

@@ -325,7 +325,7 @@ TEST_F(BadInput, CommandLineCatalogue) {
           "-1"},
          2,
          "--on-boundary-K"},
-        {{"no-such-command"}, 2, "subcommand"},
+        {{"no-such-command"}, 2, "unknown command 'no-such-command'"},
         {{}, 2, "subcommand"},
         {{"validate"}, 2, "FILE"},
         {{"validate", "absent.json"}, 1, "absent.json"},

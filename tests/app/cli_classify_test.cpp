@@ -194,6 +194,10 @@ TEST_F(CliClassify, UsageErrors) {
               kExitUsage);
     EXPECT_EQ(runCli({"classify", "--substance", "water", "--T", "0", "--P", "1"}).code,
               kExitBadInput);
+    const Result unknown = runCli({"clasify", "--substance", "water"});
+    EXPECT_EQ(unknown.code, kExitUsage);
+    EXPECT_NE(unknown.err.find("unknown command 'clasify'"), std::string::npos) << unknown.err;
+    EXPECT_NE(unknown.err.find("classify"), std::string::npos);
 }
 
 }  // namespace
