@@ -99,7 +99,9 @@ struct RowBlock {
     std::vector<double> T, P;       // kelvin, pascal
     csv::Writer text;               // the output rows
 
-    explicit RowBlock(char delimiter) : text(delimiter) {}
+    RowBlock(char delimiter, bool decimalComma) : text(delimiter) {
+        text.setDecimalComma(decimalComma);
+    }
     std::size_t size() const { return ends.size(); }
     void add(std::string_view record, const RowState &s) {
         records.append(record);
@@ -156,7 +158,7 @@ void classifyFile(const ClassifyArgs &a, Io &io) {
     }
     const unsigned workers = workerThreads(a.threads);
     OrderedPipeline<RowBlock> pipeline(
-        workers, 2 * workers + 2, [&] { return RowBlock(reader.delimiter()); },
+        workers, 2 * workers + 2, [&] { return RowBlock(reader.delimiter(), a.file.decimalComma); },
         [&](RowBlock &b) { classifyBlock(classifier, b); },
         [&](RowBlock &b) {
             out.stream().write(b.text.text().data(),

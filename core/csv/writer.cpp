@@ -54,7 +54,9 @@ void Writer::field(double value) {
     separate();
     if (std::isnan(value)) return;
     if (room() < kNumberBytes) grow(kNumberBytes);
+    char *start = pos_;
     pos_ = std::to_chars(pos_, end_, value).ptr;
+    if (decimalComma_) std::replace(start, pos_, '.', ',');
 }
 
 void Writer::flush() {

@@ -24,6 +24,9 @@ public:
     ~Writer() = default;  // does not flush: call flush() and let it throw
 
     char delimiter() const { return delimiter_; }
+    // Numbers written with a decimal comma (12,5), for files read with one (';' or tab
+    // separated: the caller makes sure the separator is not ',').
+    void setDecimalComma(bool on) { decimalComma_ = on; }
     // Text that is already a row's fields (e.g. an input record passed through).
     void raw(std::string_view text) {
         separate();
@@ -86,6 +89,7 @@ private:
     char *pos_ = nullptr;
     char *end_ = nullptr;
     bool rowStart_ = true;
+    bool decimalComma_ = false;
 };
 
 }  // namespace pw::csv

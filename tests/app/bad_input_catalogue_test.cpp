@@ -278,6 +278,10 @@ TEST_F(BadInput, DeclaredDecimalCommaIsReadCorrectly) {
     const std::string out = read("out.csv");
     EXPECT_EQ(out.rfind("T [degC];P [mbar];phase;", 0), 0u) << out;
     EXPECT_NE(out.find("\n-40,5;0,1;vapor;"), std::string::npos) << out;
+    // The computed margins follow the file's decimal mark: no '.' anywhere in the data row.
+    const std::string row = out.substr(out.find('\n') + 1);
+    EXPECT_EQ(row.find('.'), std::string::npos) << row;
+    EXPECT_NE(row.find(";sublimation;"), std::string::npos) << row;
 }
 
 TEST_F(BadInput, ByteOrderMarkAndCrlfAreAccepted) {
