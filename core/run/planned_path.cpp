@@ -2,11 +2,11 @@
 
 #include <algorithm>
 #include <cmath>
-#include <fstream>
 #include <nlohmann/json.hpp>
 #include <sstream>
 
 #include "core/errors.h"
+#include "core/run/json_file.h"
 #include "core/run/quantity.h"
 
 namespace pw::run {
@@ -186,17 +186,8 @@ std::string_view toString(StepKind kind) {
 }
 
 Plan parsePlanJson(std::string_view content, const std::string &file) {
-    json doc;
-    try {
-        doc = json::parse(content);
-    } catch (const json::parse_error &e) {
-        throw InputError(file, 0, "", std::string("not valid JSON: ") + e.what());
-    }
-    try {
-        return planFromJson(doc, file, true, {});
-    } catch (const json::exception &e) {
-        throw InputError(file, 0, "", std::string("unexpected JSON value: ") + e.what());
-    }
+    const json doc = parseJsonText(content, file);
+    return withJsonErrors(file, [&] { return planFromJson(doc, file, true, {}); });
 }
 
 Plan parsePlanText(std::string_view content, const std::string &file) {
@@ -239,12 +230,6 @@ Plan parsePlan(std::string_view content, const std::string &file) {
     return parsePlanText(content, file);
 }
 
-Plan readPlanFile(const std::string &path) {
-    std::ifstream in(path, std::ios::binary);
-    if (!in) throw InputError(path, 0, "", "cannot open the file");
-    std::ostringstream ss;
-    ss << in.rdbuf();
-    return parsePlan(ss.str(), path);
-}
+Plan readPlanFile(const std::string &path) { return parsePlan(readTextFile(path), path); }
 
 }  // namespace pw::run

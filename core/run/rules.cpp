@@ -1,11 +1,11 @@
 #include "core/run/rules.h"
 
 #include <algorithm>
-#include <fstream>
 #include <nlohmann/json.hpp>
 #include <sstream>
 
 #include "core/errors.h"
+#include "core/run/json_file.h"
 #include "core/run/quantity.h"
 
 namespace pw::run {
@@ -154,13 +154,8 @@ std::string_view toString(Verdict v) {
 }
 
 RuleSet parseRulesJson(std::string_view content, const std::string &file) {
-    json doc;
-    try {
-        doc = json::parse(content);
-    } catch (const json::parse_error &e) {
-        throw InputError(file, 0, "", std::string("not valid JSON: ") + e.what());
-    }
-    try {
+    const json doc = parseJsonText(content, file);
+    return withJsonErrors(file, [&] {
         if (!doc.is_object() || doc.value("format", std::string()) != "phasewright-rules")
             throw InputError(file, 0, "format", "expected \"phasewright-rules\"");
         if (doc.value("version", 0) != 1)
@@ -174,18 +169,10 @@ RuleSet parseRulesJson(std::string_view content, const std::string &file) {
         for (std::size_t i = 0; i < rules.size(); ++i)
             set.rules.push_back(parseRule(rules[i], file, static_cast<long>(i + 1)));
         return set;
-    } catch (const json::exception &e) {
-        throw InputError(file, 0, "", std::string("unexpected JSON value: ") + e.what());
-    }
+    });
 }
 
-RuleSet readRulesFile(const std::string &path) {
-    std::ifstream in(path, std::ios::binary);
-    if (!in) throw InputError(path, 0, "", "cannot open the file");
-    std::ostringstream ss;
-    ss << in.rdbuf();
-    return parseRulesJson(ss.str(), path);
-}
+RuleSet readRulesFile(const std::string &path) { return parseRulesJson(readTextFile(path), path); }
 
 bool allPassed(const std::vector<RuleVerdict> &verdicts) {
     return std::all_of(verdicts.begin(), verdicts.end(),
