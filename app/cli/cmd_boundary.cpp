@@ -68,11 +68,8 @@ void addBoundaryCommand(CLI::App &app, Io &io) {
         "Every phase boundary at a temperature (its pressure) or at a pressure (its "
         "temperature)");
     addSubstanceOption(cmd, a->substance);
-    auto *t = cmd->add_option("--T", a->T, "temperature (unit: --t-unit, default K)");
-    auto *p = cmd->add_option("--P", a->P, "absolute pressure (unit: --p-unit, default Pa)");
+    const auto [t, p] = addStatePointOptions(cmd, a->T, a->P, a->tUnit, a->pUnit);
     t->excludes(p);
-    cmd->add_option("--t-unit", a->tUnit, "temperature unit: K, degC, degF, degR");
-    cmd->add_option("--p-unit", a->pUnit, "pressure unit: Pa, kPa, MPa, bar, mbar, Torr, mTorr...");
     cmd->add_flag("--json", a->json, "print JSON");
     cmd->callback([a, &io] {
         if (!a->T && !a->P) throw CLI::RequiredError("--T or --P");

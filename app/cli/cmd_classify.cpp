@@ -200,10 +200,7 @@ void addClassifyCommand(CLI::App &app, Io &io) {
         "Phase of a state point (--T, --P) or of every row of a CSV file (--input), with the "
         "nearest boundary and the margins dT_K and dP_Pa to it");
     addSubstanceOption(cmd, a->substance);
-    auto *t = cmd->add_option("--T", a->T, "temperature (unit: --t-unit, default K)");
-    auto *p = cmd->add_option("--P", a->P, "absolute pressure (unit: --p-unit, default Pa)");
-    cmd->add_option("--t-unit", a->tUnit, "temperature unit: K, degC, degF, degR");
-    cmd->add_option("--p-unit", a->pUnit, "pressure unit: Pa, kPa, MPa, bar, mbar, Torr, mTorr...");
+    const auto [t, p] = addStatePointOptions(cmd, a->T, a->P, a->tUnit, a->pUnit);
     auto *json = cmd->add_flag("--json", a->json, "single point: print JSON");
     auto *in = cmd->add_option("--input", a->file.input, "CSV file of state points ('-': stdin)");
     auto *outOpt = cmd->add_option("--output", a->output,

@@ -36,6 +36,16 @@ void addStateFileOptions(CLI::App *cmd, StateFileOptions &o, bool withTime) {
     o.columns.wantTime = withTime;
 }
 
+StatePointOptions addStatePointOptions(CLI::App *cmd, std::optional<double> &T,
+                                       std::optional<double> &P, std::optional<std::string> &tUnit,
+                                       std::optional<std::string> &pUnit) {
+    auto *t = cmd->add_option("--T", T, "temperature (unit: --t-unit, default K)");
+    auto *p = cmd->add_option("--P", P, "absolute pressure (unit: --p-unit, default Pa)");
+    cmd->add_option("--t-unit", tUnit, "temperature unit: K, degC, degF, degR");
+    cmd->add_option("--p-unit", pUnit, "pressure unit: Pa, kPa, MPa, bar, mbar, Torr, mTorr...");
+    return {t, p};
+}
+
 void addToleranceOptions(CLI::App *cmd, ClassifyOptions &o) {
     cmd->add_option("--on-boundary-K", o.onBoundary_K, "on_boundary when |dT| is at most this (K)")
         ->capture_default_str()

@@ -27,6 +27,13 @@ struct StateFileOptions {
     bool skipBad = false;
 };
 void addStateFileOptions(CLI::App *cmd, StateFileOptions &o, bool withTime);
+// --T, --P, --t-unit, --p-unit of one state point; returns the --T and --P options.
+struct StatePointOptions {
+    CLI::Option *T, *P;
+};
+StatePointOptions addStatePointOptions(CLI::App *cmd, std::optional<double> &T,
+                                       std::optional<double> &P, std::optional<std::string> &tUnit,
+                                       std::optional<std::string> &pUnit);
 void addToleranceOptions(CLI::App *cmd, ClassifyOptions &o);
 csv::ReaderOptions readerOptions(const StateFileOptions &o);
 
