@@ -2,6 +2,8 @@
 
 #include <qcustomplot.h>
 
+#include <QFontMetricsF>
+
 #include <algorithm>
 #include <cmath>
 
@@ -46,7 +48,20 @@ QCPItemText *addText(const Ctx &c, double T_K, double P_Pa, const QString &text,
 // not cut off by the plot edge.
 void keepInView(const Ctx &c, QCPItemText *t, double T_K) {
     const ViewState &v = c.scene.view;
-    if (T_K < v.T_min_K + 0.72 * (v.T_max_K - v.T_min_K)) return;
+    const double frac = (T_K - v.T_min_K) / (v.T_max_K - v.T_min_K);
+    bool flip = frac >= 0.72;
+    if (c.plot.width() >= 200) {
+        // The plot's size is known: flip only a label that would run past the right edge.
+        // The axis rect is the plot less its axis margins (about 90 px).
+        const double axisPx = c.plot.width() - 90.0;
+        const QFontMetricsF metrics(t->font());
+        double textPx = t->padding().left() + t->padding().right();
+        double widest = 0.0;
+        for (const QString &line : t->text().split(QLatin1Char('\n')))
+            widest = std::max(widest, metrics.horizontalAdvance(line));
+        flip = frac * axisPx + textPx + widest > axisPx;
+    }
+    if (!flip) return;
     const Qt::Alignment vertical = t->positionAlignment() & Qt::AlignVertical_Mask;
     t->setPositionAlignment(Qt::AlignRight | vertical);
     t->setTextAlignment(Qt::AlignRight);
@@ -100,6 +115,22 @@ QSize plotAreaPx(const QCustomPlot &plot) {
     return QSize(std::max(200, plot.width() - 80), std::max(150, plot.height() - 60));
 }
 
+// Region labels keep clear of the points, the fixed points and the 1 atm line with the
+// normal points, all drawn with labels of their own.
+LabelObstacles labelObstacles(const Ctx &c, const PhaseDiagram &d) {
+    LabelObstacles o;
+    for (const StatePoint &p : c.scene.points) o.marks.emplace_back(p.T_K, p.P_Pa);
+    for (const FixedPoint *f : {d.triplePoint(), d.criticalPoint()})
+        if (f && c.scene.labelFixedPoints) o.marks.emplace_back(f->T_K, f->P_Pa);
+    if (c.scene.showAtmosphere) {
+        o.isobars_Pa.push_back(kStandardAtmosphere_Pa);
+        for (const auto &T :
+             {d.normalMeltingPoint(), d.normalBoilingPoint(), d.normalSublimationPoint()})
+            if (T) o.marks.emplace_back(*T, kStandardAtmosphere_Pa);
+    }
+    return o;
+}
+
 void addRegions(const Ctx &c, const PhaseDiagram &d) {
     if (!c.plot.layer(kRegionLayer))
         c.plot.addLayer(kRegionLayer, c.plot.layer(QStringLiteral("background")),
@@ -108,8 +139,8 @@ void addRegions(const Ctx &c, const PhaseDiagram &d) {
     const double cell = std::max(1.0, c.style.regionCellPx);
     const int cols = std::clamp(static_cast<int>(px.width() / cell), 2, 1600);
     const int rows = std::clamp(static_cast<int>(px.height() / cell), 2, 1200);
-    const RegionRaster raster =
-        rasterRegions(d, c.scene.view, cols, rows, px.width() / double(cols), c.style.dark);
+    const RegionRaster raster = rasterRegions(
+        d, c.scene.view, cols, rows, px.width() / double(cols), c.style.dark, labelObstacles(c, d));
     if (c.scene.fillRegions && !raster.image.isNull()) {
         auto *pm = new QCPItemPixmap(&c.plot);
         pm->setLayer(kRegionLayer);

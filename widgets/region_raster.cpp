@@ -80,10 +80,86 @@ std::vector<int> insideDistance(const Grid &g) {
     return dist;
 }
 
+// Cells a region label must not cover get category kObstacle in a copy of the grid used for
+// the label search only (the fill keeps the real regions).
+constexpr int kObstacle = -2;
+
+Grid withObstacles(Grid g, const ViewState &v, double cellPx, const LabelObstacles &o) {
+    const bool logP = v.logPressure && v.P_min_Pa > 0;
+    auto row = [&](double P) {
+        const double f = logP ? (std::log(v.P_max_Pa) - std::log(P)) /
+                                    (std::log(v.P_max_Pa) - std::log(v.P_min_Pa))
+                              : (v.P_max_Pa - P) / (v.P_max_Pa - v.P_min_Pa);
+        return static_cast<int>(std::floor(f * g.rows));
+    };
+    auto col = [&](double T) {
+        return static_cast<int>(std::floor((T - v.T_min_K) / (v.T_max_K - v.T_min_K) * g.cols));
+    };
+    auto block = [&](int c0, int c1, int r0, int r1) {
+        for (int r = std::max(0, r0); r <= std::min(g.rows - 1, r1); ++r)
+            for (int c = std::max(0, c0); c <= std::min(g.cols - 1, c1); ++c)
+                g.category[static_cast<std::size_t>(r * g.cols + c)] = kObstacle;
+    };
+    const int markPx = 8, textWidthPx = 110, textHeightPx = 16;  // a point label, roughly
+    const int cell = std::max(1, static_cast<int>(std::lround(cellPx)));
+    for (const auto &[T, P] : o.marks) {
+        if (!(P > 0)) continue;
+        const int c = col(T), r = row(P);
+        block(c - markPx / cell, c + textWidthPx / cell, r - textHeightPx / cell,
+              r + markPx / cell);
+    }
+    for (double P : o.isobars_Pa)
+        if (P > 0) block(0, g.cols - 1, row(P) - 4 / cell, row(P) + 4 / cell);
+    return g;
+}
+
+// Per region, the cell for its label: among the cells at least 90 % as far from the edge as
+// the farthest one (a long, even-width band has many), the one nearest the region's centre,
+// so a label sits in the middle of a tall strip rather than at its top. -1: no cell.
+std::vector<int> labelCells(const Grid &g, const std::vector<int> &dist, std::size_t regions) {
+    std::vector<int> far(regions, 0);
+    std::vector<double> sumC(regions, 0.0), sumR(regions, 0.0), count(regions, 0.0);
+    for (std::size_t i = 0; i < dist.size(); ++i) {
+        if (g.category[i] < 0) continue;
+        const auto k = static_cast<std::size_t>(g.category[i]);
+        far[k] = std::max(far[k], dist[i]);
+        sumC[k] += static_cast<double>(static_cast<int>(i) % g.cols);
+        sumR[k] += static_cast<double>(static_cast<int>(i) / g.cols);
+        count[k] += 1.0;
+    }
+    std::vector<int> best(regions, -1);
+    std::vector<double> bestD2(regions, 0.0);
+    for (std::size_t i = 0; i < dist.size(); ++i) {
+        if (g.category[i] < 0) continue;
+        const auto k = static_cast<std::size_t>(g.category[i]);
+        if (10 * dist[i] < 9 * far[k]) continue;
+        const double dc = static_cast<int>(i) % g.cols - sumC[k] / count[k];
+        const double dr = static_cast<int>(i) / g.cols - sumR[k] / count[k];
+        const double d2 = dc * dc + dr * dr;
+        if (best[k] < 0 || d2 < bestD2[k]) {
+            best[k] = static_cast<int>(i);
+            bestD2[k] = d2;
+        }
+    }
+    return best;
+}
+
 // Long names break over two lines so they fit narrower regions.
 QString displayName(const QString &name) {
     if (name == QLatin1String("supercritical fluid")) return QStringLiteral("supercritical\nfluid");
     return name;
+}
+
+// The state at the centre of cell i.
+std::pair<double, double> cellState(const ViewState &view, int columns, int rows, int i) {
+    const int c = i % columns, r = i / columns;
+    const double fy = (r + 0.5) / rows;
+    const bool logP = view.logPressure && view.P_min_Pa > 0;
+    const double T = view.T_min_K + (view.T_max_K - view.T_min_K) * (c + 0.5) / columns;
+    const double P = logP ? std::exp(std::log(view.P_max_Pa) +
+                                     (std::log(view.P_min_Pa) - std::log(view.P_max_Pa)) * fy)
+                          : view.P_max_Pa + (view.P_min_Pa - view.P_max_Pa) * fy;
+    return {T, P};
 }
 
 }  // namespace
@@ -107,7 +183,7 @@ QColor regionColour(const QString &name, bool dark) {
 }
 
 RegionRaster rasterRegions(const PhaseDiagram &diagram, const ViewState &view, int columns,
-                           int rows, double cellPx, bool dark) {
+                           int rows, double cellPx, bool dark, const LabelObstacles &obstacles) {
     RegionRaster out;
     if (columns < 2 || rows < 2 || !view.valid()) return out;
     std::vector<QString> names;
@@ -121,31 +197,26 @@ RegionRaster rasterRegions(const PhaseDiagram &diagram, const ViewState &view, i
         for (int c = 0; c < columns; ++c)
             if (const int k = g.at(c, r); k >= 0) line[c] = colours[static_cast<std::size_t>(k)];
     }
-    const std::vector<int> dist = insideDistance(g);
-    std::vector<int> best(names.size(), -1);
-    for (std::size_t i = 0; i < dist.size(); ++i) {
-        const int k = g.category[i];
-        if (k >= 0 && (best[static_cast<std::size_t>(k)] < 0 ||
-                       dist[i] > dist[static_cast<std::size_t>(best[static_cast<std::size_t>(k)])]))
-            best[static_cast<std::size_t>(k)] = static_cast<int>(i);
-    }
-    const bool logP = view.logPressure && view.P_min_Pa > 0;
+    // Labels keep clear of points, fixed points and the 1 atm line where the region leaves
+    // room; a region too crowded for that gets its label where it is widest.
+    const Grid free = withObstacles(g, view, cellPx, obstacles);
+    const std::vector<int> dist = insideDistance(free), plainDist = insideDistance(g);
+    const std::vector<int> best = labelCells(free, dist, names.size());
+    const std::vector<int> plainBest = labelCells(g, plainDist, names.size());
     for (std::size_t k = 0; k < names.size(); ++k) {
-        const int i = best[k];
-        // Half the label's width in pixels must fit horizontally inside the region.
         const QString text = displayName(names[k]);
         qsizetype longest = 0;
         for (const QString &line : text.split(QLatin1Char('\n')))
             longest = std::max(longest, line.size());
+        // Half the label's width in pixels must fit horizontally inside the region.
         const double needPx = 3.6 * static_cast<double>(longest) + 8.0;
-        if (i < 0 || dist[static_cast<std::size_t>(i)] / double(kHorizontalStep) * cellPx < needPx)
-            continue;
-        const int c = i % columns, r = i / columns;
-        const double fy = (r + 0.5) / rows;
-        const double T = view.T_min_K + (view.T_max_K - view.T_min_K) * (c + 0.5) / columns;
-        const double P = logP ? std::exp(std::log(view.P_max_Pa) +
-                                         (std::log(view.P_min_Pa) - std::log(view.P_max_Pa)) * fy)
-                              : view.P_max_Pa + (view.P_min_Pa - view.P_max_Pa) * fy;
+        auto fits = [&](int cell, const std::vector<int> &d) {
+            return cell >= 0 &&
+                   d[static_cast<std::size_t>(cell)] / double(kHorizontalStep) * cellPx >= needPx;
+        };
+        const int i = fits(best[k], dist) ? best[k] : plainBest[k];
+        if (!fits(i, plainDist) && !fits(i, dist)) continue;
+        const auto [T, P] = cellState(view, columns, rows, i);
         out.labels.push_back({text, T, P});
     }
     return out;

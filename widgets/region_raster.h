@@ -6,6 +6,7 @@
 #include <QColor>
 #include <QImage>
 #include <QString>
+#include <utility>
 #include <vector>
 
 #include "core/phase_diagram.h"
@@ -27,9 +28,17 @@ struct RegionRaster {
 // The light fill colour of a region (own palette); alpha tuned for a light or dark background.
 QColor regionColour(const QString &name, bool dark);
 
+// What region labels keep clear of: marked states (their marker and the label to their right)
+// and isobars drawn across the view (the 1 atm line).
+struct LabelObstacles {
+    std::vector<std::pair<double, double>> marks;  // (T_K, P_Pa)
+    std::vector<double> isobars_Pa;
+};
+
 // `columns` x `rows` cells; `cellPx` is the size of one cell on screen, used to decide whether
-// a label fits inside its region.
+// a label fits inside its region and how many cells an obstacle covers.
 RegionRaster rasterRegions(const PhaseDiagram &diagram, const ViewState &view, int columns,
-                           int rows, double cellPx, bool dark);
+                           int rows, double cellPx, bool dark,
+                           const LabelObstacles &obstacles = {});
 
 }  // namespace pw::ui

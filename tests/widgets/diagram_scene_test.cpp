@@ -117,5 +117,26 @@ TEST_F(SceneTest, RegionRasterAgreesWithClassifyAndDecimationKeepsEnds) {
     EXPECT_EQ(shown.back().time_s, 99999.0);
 }
 
+// Region labels sit in the middle of a tall strip and keep clear of marked points.
+TEST_F(SceneTest, RegionLabelsAvoidMarkedPoints) {
+    const auto co2 = library_.find("carbon-dioxide");
+    const ViewState v{178.15, 358.15, 5e4, 5e7, true};  // CO2 around its critical point
+    auto gasLabel = [&](const LabelObstacles &o) {
+        for (const RegionLabel &l : rasterRegions(*co2, v, 200, 120, 4.0, false, o).labels)
+            if (l.name == QStringLiteral("gas")) return l;
+        ADD_FAILURE() << "no gas label";
+        return RegionLabel{};
+    };
+    const RegionLabel free = gasLabel({});
+    // Span & Wagner (1996): Tc 304.13 K, pc 7.3773 MPa. The gas strip (T > Tc, p < pc) runs
+    // from 50 kPa to pc; its label is not at the top, by the critical point's own label.
+    EXPECT_GT(free.T_K, 304.13);
+    EXPECT_LT(free.P_Pa, 2e6);
+    LabelObstacles o;
+    o.marks.emplace_back(free.T_K - 5.0, free.P_Pa);  // a point just left of the label
+    const RegionLabel moved = gasLabel(o);
+    EXPECT_GT(std::abs(std::log(moved.P_Pa / free.P_Pa)), 0.3) << moved.P_Pa << " Pa";
+}
+
 }  // namespace
 }  // namespace pw::ui::test
