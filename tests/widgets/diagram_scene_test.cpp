@@ -117,6 +117,31 @@ TEST_F(SceneTest, RegionRasterAgreesWithClassifyAndDecimationKeepsEnds) {
     EXPECT_EQ(shown.back().time_s, 99999.0);
 }
 
+// A point label flips to the left of its point only when it would run past the right edge.
+TEST_F(SceneTest, PointLabelsFlipOnlyWhenCutOff) {
+    QCustomPlot plot;
+    plot.resize(1000, 600);
+    DiagramScene scene;
+    scene.substances = {library_.find("carbon-dioxide")};
+    scene.view = ViewState{200.0, 360.0, 5e4, 5e7, true};
+    scene.points = {{QStringLiteral("short"), 330.0, 1e6},  // 81 % across: room to the right
+                    {QStringLiteral("a rather long label near the edge"), 355.0, 1e5}};
+    renderScene(plot, scene, SceneStyle{});
+    int checked = 0;
+    for (int i = 0; i < plot.itemCount(); ++i) {
+        auto *t = qobject_cast<QCPItemText *>(plot.item(i));
+        if (!t) continue;
+        if (t->text() == QStringLiteral("short")) {
+            EXPECT_TRUE(t->positionAlignment() & Qt::AlignLeft);
+            ++checked;
+        } else if (t->text().startsWith(QStringLiteral("a rather"))) {
+            EXPECT_TRUE(t->positionAlignment() & Qt::AlignRight);
+            ++checked;
+        }
+    }
+    EXPECT_EQ(checked, 2);
+}
+
 // Region labels sit in the middle of a tall strip and keep clear of marked points.
 TEST_F(SceneTest, RegionLabelsAvoidMarkedPoints) {
     const auto co2 = library_.find("carbon-dioxide");
