@@ -133,11 +133,7 @@ public:
     ReducedSum(bool wagner, Reference ref, std::vector<double> e)
         : wagner_(wagner), ref_(ref), e_(std::move(e)) {}
     std::string name() const override { return wagner_ ? "wagner" : "iapws-sublimation"; }
-    std::vector<std::string> parameterNames() const override {
-        std::vector<std::string> names;
-        for (std::size_t i = 0; i < e_.size(); ++i) names.push_back("a" + std::to_string(i + 1));
-        return names;
-    }
+    std::vector<std::string> parameterNames() const override { return coefficientNames(e_.size()); }
     std::vector<std::string> parameterUnits() const override {
         return std::vector<std::string>(e_.size(), "");
     }
@@ -192,6 +188,12 @@ std::unique_ptr<FitForm> makeWagnerForm(Reference ref, std::vector<double> expon
 }
 std::unique_ptr<FitForm> makeIapwsSublimationForm(Reference ref, std::vector<double> b) {
     return std::make_unique<ReducedSum>(false, ref, std::move(b));
+}
+
+std::vector<std::string> coefficientNames(std::size_t n) {
+    std::vector<std::string> names;
+    for (std::size_t i = 0; i < n; ++i) names.push_back("a" + std::to_string(i + 1));
+    return names;
 }
 
 std::vector<double> parseExponents(const std::string &text) {

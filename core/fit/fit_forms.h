@@ -53,4 +53,7 @@ std::unique_ptr<FitForm> makeMeltingPolynomialForm(Reference ref, std::vector<do
 // Throws pw::Error for an empty list, a non-number or a non-positive exponent.
 std::vector<double> parseExponents(const std::string &text);
 
+// "a1", "a2", ... "an": the coefficient names of the sum forms.
+std::vector<std::string> coefficientNames(std::size_t n);
+
 }  // namespace pw::fit

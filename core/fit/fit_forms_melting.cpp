@@ -77,11 +77,7 @@ class MeltingPolynomial final : public FitForm {
 public:
     MeltingPolynomial(Reference ref, std::vector<double> e) : ref_(ref), e_(std::move(e)) {}
     std::string name() const override { return "melting-polynomial"; }
-    std::vector<std::string> parameterNames() const override {
-        std::vector<std::string> names;
-        for (std::size_t i = 0; i < e_.size(); ++i) names.push_back("a" + std::to_string(i + 1));
-        return names;
-    }
+    std::vector<std::string> parameterNames() const override { return coefficientNames(e_.size()); }
     std::vector<std::string> parameterUnits() const override {
         return std::vector<std::string>(e_.size(), "");
     }
