@@ -200,9 +200,9 @@ RegionRaster rasterRegions(const PhaseDiagram &diagram, const ViewState &view, i
     // Labels keep clear of points, fixed points and the 1 atm line where the region leaves
     // room; a region too crowded for that gets its label where it is widest.
     const Grid free = withObstacles(g, view, cellPx, obstacles);
-    const std::vector<int> dist = insideDistance(free), plainDist = insideDistance(g);
+    const std::vector<int> dist = insideDistance(free);
     const std::vector<int> best = labelCells(free, dist, names.size());
-    const std::vector<int> plainBest = labelCells(g, plainDist, names.size());
+    std::vector<int> plainDist, plainBest;  // without obstacles: only if a region needs it
     for (std::size_t k = 0; k < names.size(); ++k) {
         const QString text = displayName(names[k]);
         qsizetype longest = 0;
@@ -214,8 +214,15 @@ RegionRaster rasterRegions(const PhaseDiagram &diagram, const ViewState &view, i
             return cell >= 0 &&
                    d[static_cast<std::size_t>(cell)] / double(kHorizontalStep) * cellPx >= needPx;
         };
-        const int i = fits(best[k], dist) ? best[k] : plainBest[k];
-        if (!fits(i, plainDist) && !fits(i, dist)) continue;
+        int i = best[k];
+        if (!fits(i, dist)) {
+            if (plainDist.empty()) {
+                plainDist = insideDistance(g);
+                plainBest = labelCells(g, plainDist, names.size());
+            }
+            i = plainBest[k];
+            if (!fits(i, plainDist)) continue;
+        }
         const auto [T, P] = cellState(view, columns, rows, i);
         out.labels.push_back({text, T, P});
     }
