@@ -67,7 +67,7 @@ Ordered writeParameters(const ModelSpec &spec) {
 
 Ordered writeBoundary(const Boundary &b) {
     Ordered out;
-    out["kind"] = std::string(io::kindName(b.kind));
+    out["kind"] = std::string(toString(b.kind));
     if (!b.solidForm.empty()) out["solid_form"] = b.solidForm;
     out["model"] = b.spec.form;
     out["parameters"] = writeParameters(b.spec);

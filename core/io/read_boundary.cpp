@@ -11,7 +11,7 @@ namespace {
 std::optional<BoundaryKind> parseKind(const std::string &text) {
     for (const auto k : {BoundaryKind::Melting, BoundaryKind::Vaporization,
                          BoundaryKind::Sublimation, BoundaryKind::SolidSolid})
-        if (text == kindName(k)) return k;
+        if (text == toString(k)) return k;
     return std::nullopt;
 }
 
@@ -119,20 +119,6 @@ void readBoundary(const Json &b, const std::string &path, Reader &reader, Substa
 }
 
 }  // namespace
-
-std::string_view kindName(BoundaryKind kind) {
-    switch (kind) {
-        case BoundaryKind::Melting:
-            return "melting";
-        case BoundaryKind::Vaporization:
-            return "vaporization";
-        case BoundaryKind::Sublimation:
-            return "sublimation";
-        case BoundaryKind::SolidSolid:
-            return "solid-solid";
-    }
-    return "";
-}
 
 void readBoundaries(const Json &doc, Reader &reader, Substance &s) {
     const Json *bs = reader.member(doc, "boundaries", "", true);

@@ -15,9 +15,6 @@ void readFixedPoints(const Json &doc, Reader &reader, Substance &s);
 // "boundaries" (including building each model with makeModel()).
 void readBoundaries(const Json &doc, Reader &reader, Substance &s);
 
-// The file-format name of a boundary kind ("vaporization", "solid-solid"...).
-std::string_view kindName(BoundaryKind kind);
-
 // The citation for `key` (at `path`) from s.sources; records an error when it is unknown.
 Citation resolveSource(const Substance &s, const std::string &key, const std::string &path,
                        Reader &reader);

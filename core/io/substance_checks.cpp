@@ -21,14 +21,14 @@ std::optional<double> sample(const Boundary &b, double T, const std::string &pat
     } catch (const std::exception &e) {
         reader.error(path, fmt::format("the {} curve cannot be evaluated at T = {} K inside its "
                                        "validity range: {}",
-                                       kindName(b.kind), T, e.what()));
+                                       toString(b.kind), T, e.what()));
         return std::nullopt;
     }
     if (!std::isfinite(p) || p <= 0.0) {
         reader.error(path, fmt::format("the {} curve gives p = {} Pa at T = {} K inside its "
                                        "validity range [{}, {}] K; expected a finite positive "
                                        "pressure (check the coefficients and units)",
-                                       kindName(b.kind), p, T, b.validity.min_K, b.validity.max_K));
+                                       toString(b.kind), p, T, b.validity.min_K, b.validity.max_K));
         return std::nullopt;
     }
     return p;
@@ -52,7 +52,7 @@ void checkCurve(const Boundary &b, const std::string &path, Reader &reader) {
                 reader.error(path, fmt::format("the {} curve is not monotonic in its validity "
                                                "range: p = {} Pa at {} K, then {} Pa at {} K; "
                                                "expected a pressure that {} steadily with T",
-                                               kindName(b.kind), previous,
+                                               toString(b.kind), previous,
                                                lo + (hi - lo) * (i - 1) / (kCurveSamples - 1), *p,
                                                T, mustRise ? "rises" : "rises or falls"));
                 return;
@@ -128,7 +128,7 @@ void checkPoint(const Substance &s, const FixedPoint &fp, const std::string &pat
                    fmt::format("{} ({} K, {} Pa) is off the {} curve of {} by {:.3g} % (in {}); "
                                "expected within {} % ({} above {} %)",
                                critical ? "the critical point" : "the triple point", fp.T_K,
-                               fp.P_Pa, kindName(b.kind), boundaryPath(i), *d * 100.0,
+                               fp.P_Pa, toString(b.kind), boundaryPath(i), *d * 100.0,
                                steep ? "temperature" : "pressure", kFixedPointWarnRel * 100.0,
                                isError ? "refused" : "an error", kFixedPointErrorRel * 100.0));
     }
