@@ -69,9 +69,14 @@ void classifyPoint(const ClassifyArgs &a, Io &io) {
     if (c.phase == Phase::Solid) io.out << " (" << c.solidForm << ")";
     io.out << '\n';
     if (c.phase == Phase::Unknown) io.out << "  reason: " << c.reason << '\n';
+    // A margin that does not exist there (dP above the triple temperature on the sublimation
+    // curve) reads "n/a".
+    auto margin = [](double v, const char *unit) {
+        return std::isfinite(v) ? fmt::format("{:+.6g} {}", v, unit) : std::string("n/a");
+    };
     if (!c.nearestLabel.empty())
-        io.out << fmt::format("  nearest boundary: {}; dT = {:+.6g} K, dP = {:+.6g} Pa\n",
-                              c.nearestLabel, c.dT_K, c.dP_Pa);
+        io.out << fmt::format("  nearest boundary: {}; dT = {}, dP = {}\n", c.nearestLabel,
+                              margin(c.dT_K, "K"), margin(c.dP_Pa, "Pa"));
     if (const std::string f = flagsText(c); !f.empty()) io.out << "  flags: " << f << '\n';
 }
 
@@ -214,7 +219,7 @@ void addClassifyCommand(CLI::App &app, Io &io) {
                     "CSV input: threads for classifying and formatting (0: one per core; 1: "
                     "all in one thread); the output is the same for any number")
         ->capture_default_str()
-        ->check(CLI::NonNegativeNumber)
+        ->check(CLI::Range(0, 4096))
         ->needs(in);
     cmd->callback([a, &io] {
         if (a->file.input.empty())

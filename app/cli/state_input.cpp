@@ -46,14 +46,32 @@ StatePointOptions addStatePointOptions(CLI::App *cmd, std::optional<double> &T,
     return {t, p};
 }
 
+namespace {
+
+// CLI11's NonNegativeNumber prints the largest double in its message; this one is readable.
+CLI::Validator notNegative() {
+    return CLI::Validator(
+        [](std::string &text) {
+            double v = 0.0;
+            const auto [end, ec] = std::from_chars(text.data(), text.data() + text.size(), v);
+            if (ec == std::errc() && end == text.data() + text.size() && std::isfinite(v) &&
+                v >= 0.0)
+                return std::string();
+            return "expected a number of 0 or more, got '" + text + "'";
+        },
+        "NUMBER >= 0");
+}
+
+}  // namespace
+
 void addToleranceOptions(CLI::App *cmd, ClassifyOptions &o) {
     cmd->add_option("--on-boundary-K", o.onBoundary_K, "on_boundary when |dT| is at most this (K)")
         ->capture_default_str()
-        ->check(CLI::NonNegativeNumber);
+        ->check(notNegative());
     cmd->add_option("--on-boundary-rel", o.onBoundaryRel,
                     "on_boundary when |dP| is at most this fraction of the boundary pressure")
         ->capture_default_str()
-        ->check(CLI::NonNegativeNumber);
+        ->check(notNegative());
 }
 
 csv::ReaderOptions readerOptions(const StateFileOptions &o) {

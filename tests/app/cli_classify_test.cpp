@@ -194,6 +194,15 @@ TEST_F(CliClassify, UsageErrors) {
               kExitUsage);
     EXPECT_EQ(runCli({"classify", "--substance", "water", "--T", "0", "--P", "1"}).code,
               kExitBadInput);
+    const Result text = runCli({"classify", "--substance", "water", "--T", "300", "--P", "1"});
+    ASSERT_EQ(text.code, kExitOk);
+    // 300 K is above the triple temperature: the sublimation curve has no pressure there.
+    EXPECT_NE(text.out.find("dP = n/a"), std::string::npos) << text.out;
+    EXPECT_EQ(text.out.find("nan"), std::string::npos);
+    EXPECT_EQ(runCli({"classify", "--substance", "water", "--T", "300", "--P", "1",
+                      "--on-boundary-K", "-1"})
+                  .code,
+              kExitUsage);
     const Result unknown = runCli({"clasify", "--substance", "water"});
     EXPECT_EQ(unknown.code, kExitUsage);
     EXPECT_NE(unknown.err.find("unknown command 'clasify'"), std::string::npos) << unknown.err;
