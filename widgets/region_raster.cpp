@@ -21,14 +21,51 @@ struct Grid {
     int at(int c, int r) const { return category[static_cast<std::size_t>(r * cols + c)]; }
 };
 
+// Cells are classified with Classifier::view (no strings built per cell); a region's index is
+// found by phase and solid-form text, which views stable text owned by the classifier.
+class RegionIndex {
+public:
+    explicit RegionIndex(const Classifier &classifier) : classifier_(classifier) {}
+    int of(double T, double P, std::vector<QString> &names) {
+        ClassificationView v;
+        try {
+            v = classifier_.view(T, P);
+        } catch (const pw::Error &) {
+            return -1;
+        }
+        for (const Key &k : keys_)
+            if (k.phase == v.phase && k.form.data() == v.solidForm.data() &&
+                k.form.size() == v.solidForm.size())
+                return k.index;
+        const QString name = regionName(classifier_(T, P));
+        int index = -1;
+        if (!name.isEmpty()) {
+            const auto it = std::find(names.begin(), names.end(), name);
+            index = static_cast<int>(it - names.begin());
+            if (it == names.end()) names.push_back(name);
+        }
+        keys_.push_back({v.phase, v.solidForm, index});
+        return index;
+    }
+
+private:
+    struct Key {
+        Phase phase;
+        std::string_view form;
+        int index;
+    };
+    const Classifier &classifier_;
+    std::vector<Key> keys_;
+};
+
 Grid classifyGrid(const PhaseDiagram &d, const ViewState &v, int cols, int rows,
                   std::vector<QString> &names) {
     Grid g{cols, rows, std::vector<int>(static_cast<std::size_t>(cols * rows), -1)};
-    QHash<QString, int> index;
     const bool logP = v.logPressure && v.P_min_Pa > 0;
     const double y0 = logP ? std::log(v.P_max_Pa) : v.P_max_Pa;
     const double y1 = logP ? std::log(v.P_min_Pa) : v.P_min_Pa;
     const Classifier classifier(d);
+    RegionIndex regions(classifier);
     for (int r = 0; r < rows; ++r) {
         const double y = y0 + (y1 - y0) * (r + 0.5) / rows;
         const double P = logP ? std::exp(y) : y;
@@ -36,19 +73,7 @@ Grid classifyGrid(const PhaseDiagram &d, const ViewState &v, int cols, int rows,
         for (int c = 0; c < cols; ++c) {
             const double T = v.T_min_K + (v.T_max_K - v.T_min_K) * (c + 0.5) / cols;
             if (!(T > 0)) continue;
-            QString name;
-            try {
-                name = regionName(classifier(T, P));
-            } catch (const pw::Error &) {
-                continue;
-            }
-            if (name.isEmpty()) continue;
-            auto it = index.find(name);
-            if (it == index.end()) {
-                it = index.insert(name, static_cast<int>(names.size()));
-                names.push_back(name);
-            }
-            g.category[static_cast<std::size_t>(r * cols + c)] = it.value();
+            g.category[static_cast<std::size_t>(r * cols + c)] = regions.of(T, P, names);
         }
     }
     return g;
