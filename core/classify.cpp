@@ -112,17 +112,11 @@ Classifier::Classifier(const PhaseDiagram &diagram, ClassifyOptions options)
     for (const Boundary &b : diagram.substance().boundaries) labels_.emplace_back(&b, b.label());
 }
 
-// The ceiling holds when one melting segment covers every pressure from pt to pc: no gap, no
-// extrapolation past a segment's end, so the melting temperature there stays within that
-// segment's temperatures (a pressure below the first segment has no melting temperature).
+// The diagram's own bound on its melting temperatures between pt and pc (its segments'
+// temperatures; no bound when a gap there is bridged by extrapolation).
 void Classifier::findMeltCeiling() {
     if (!std::isfinite(pt_) || !std::isfinite(pc_)) return;
-    for (const Segment &s : segments_)
-        if (s.pLow <= pt_ && s.pHigh >= pc_) {
-            meltCeilingBelowPc_ = s.tHigh;
-            return;
-        }
-    if (!segments_.empty() && segments_.front().pLow >= pc_) meltCeilingBelowPc_ = 0.0;
+    meltCeilingBelowPc_ = diagram_->meltingTemperatureCeiling(pt_, pc_);
 }
 
 std::string_view Classifier::labelOf(const Boundary *b) const {

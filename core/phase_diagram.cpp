@@ -3,6 +3,7 @@
 #include <fmt/format.h>
 #include <algorithm>
 #include <cmath>
+#include <limits>
 
 #include "core/errors.h"
 #include "core/units.h"
@@ -233,6 +234,28 @@ std::optional<BoundaryValue> PhaseDiagram::meltingTemperature(double P_Pa) const
         if (P_Pa <= s.pHi) return segmentTemperature(meltingSegs_[k], P_Pa);
     }
     return std::nullopt;
+}
+
+double PhaseDiagram::meltingTemperatureCeiling(double P_lo_Pa, double P_hi_Pa) const {
+    double ceiling = -std::numeric_limits<double>::infinity();
+    for (std::size_t k = 0; k < meltingSegs_.size(); ++k) {
+        const BoundarySegment &s = segments_[static_cast<std::size_t>(meltingSegs_[k])];
+        // A gap below this segment (after the previous one) inside the range: extrapolated.
+        if (k > 0) {
+            const BoundarySegment &prev = segments_[static_cast<std::size_t>(meltingSegs_[k - 1])];
+            if (prev.pHi < s.pLo && s.pLo > P_lo_Pa && prev.pHi < P_hi_Pa)
+                return std::numeric_limits<double>::infinity();
+        }
+        if (s.pLo > P_hi_Pa || s.pHi < P_lo_Pa) continue;
+        // T(p) is monotonic on a segment: its largest value in the range is at an end. The
+        // margin covers the inverse's accuracy (1e-9 K).
+        for (const double p : {std::max(s.pLo, P_lo_Pa), std::min(s.pHi, P_hi_Pa)}) {
+            const auto T = segmentTemperature(meltingSegs_[k], p);
+            if (!T) return std::numeric_limits<double>::infinity();
+            ceiling = std::max(ceiling, T->value + 1e-6);
+        }
+    }
+    return ceiling;
 }
 
 std::optional<BoundaryValue> PhaseDiagram::vaporizationTemperature(double P_Pa) const {

@@ -50,6 +50,9 @@ public:
 
     // Piecewise over the segments; nullopt where no segment covers the argument.
     std::optional<BoundaryValue> meltingTemperature(double P_Pa) const;
+    // No meltingTemperature(P) for P in [P_lo, P_hi] exceeds this (-inf: none there; +inf: a
+    // gap between segments there is bridged by extrapolation, so no bound is known).
+    double meltingTemperatureCeiling(double P_lo_Pa, double P_hi_Pa) const;
     std::optional<BoundaryValue> vaporizationTemperature(double P_Pa) const;  // pt <= P <= pc
     std::optional<BoundaryValue> sublimationTemperature(double P_Pa) const;   // P <= pt
     std::optional<BoundaryValue> meltingPressure(double T_K) const;

@@ -281,7 +281,12 @@ TEST(ClassifyMeltCeiling, NoMeltingTemperatureBetweenPtAndPcReachesIt) {
     }
     // Water: the ice Ih melting curve falls from the triple point, 273.16 K (IAPWS R14-08).
     const auto water = library.find("water");
-    EXPECT_NEAR(Classifier(*water).meltCeilingBelowPc(), 273.16, 1e-9);
+    EXPECT_NEAR(Classifier(*water).meltCeilingBelowPc(), 273.16, 2e-6);  // 1e-6 K margin
+    // CO2: the melting temperature at pc (Span & Wagner 1996 melting equation, 7.3773 MPa:
+    // about 218 K), so the shortcut applies to most fluid points below pc.
+    const double co2 = Classifier(*library.find("carbon-dioxide")).meltCeilingBelowPc();
+    EXPECT_GT(co2, 216.59);
+    EXPECT_LT(co2, 220.0);
 }
 
 }  // namespace
