@@ -34,18 +34,16 @@ public:
         if (depth < 1) depth = 1;
         slots_.reserve(depth);
         for (std::size_t i = 0; i < depth; ++i) slots_.push_back({make(), State::Free, nullptr});
-        for (unsigned i = 0; i < workers; ++i) threads_.emplace_back([this] { serve(); });
+        try {
+            for (unsigned i = 0; i < workers; ++i) threads_.emplace_back([this] { serve(); });
+        } catch (...) {  // a thread could not be started: stop the ones that were
+            stopWorkers();
+            throw;
+        }
     }
     OrderedPipeline(const OrderedPipeline &) = delete;
     OrderedPipeline &operator=(const OrderedPipeline &) = delete;
-    ~OrderedPipeline() {
-        {
-            const std::lock_guard lock(mutex_);
-            stop_ = true;
-        }
-        wake_.notify_all();
-        for (std::thread &t : threads_) t.join();
-    }
+    ~OrderedPipeline() { stopWorkers(); }
 
     // A free block to fill (sinks finished blocks meanwhile). Call submit() before next().
     Block &next() {
@@ -91,6 +89,15 @@ private:
     };
 
     Slot &slot(std::uint64_t index) { return slots_[index % slots_.size()]; }
+
+    void stopWorkers() {
+        {
+            const std::lock_guard lock(mutex_);
+            stop_ = true;
+        }
+        wake_.notify_all();
+        for (std::thread &t : threads_) t.join();
+    }
 
     void run(Slot &s) {
         try {

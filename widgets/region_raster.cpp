@@ -111,15 +111,19 @@ constexpr int kObstacle = -2;
 
 Grid withObstacles(Grid g, const ViewState &v, double cellPx, const LabelObstacles &o) {
     const bool logP = v.logPressure && v.P_min_Pa > 0;
+    // Fractions of the view, clamped so that a mark far outside it stays a small integer
+    // (NaN, an empty range: off the grid).
+    auto cellOf = [](double f, int n) {
+        if (!std::isfinite(f)) return -n;
+        return static_cast<int>(std::floor(std::clamp(f, -1.0, 2.0) * n));
+    };
     auto row = [&](double P) {
         const double f = logP ? (std::log(v.P_max_Pa) - std::log(P)) /
                                     (std::log(v.P_max_Pa) - std::log(v.P_min_Pa))
                               : (v.P_max_Pa - P) / (v.P_max_Pa - v.P_min_Pa);
-        return static_cast<int>(std::floor(f * g.rows));
+        return cellOf(f, g.rows);
     };
-    auto col = [&](double T) {
-        return static_cast<int>(std::floor((T - v.T_min_K) / (v.T_max_K - v.T_min_K) * g.cols));
-    };
+    auto col = [&](double T) { return cellOf((T - v.T_min_K) / (v.T_max_K - v.T_min_K), g.cols); };
     auto block = [&](int c0, int c1, int r0, int r1) {
         for (int r = std::max(0, r0); r <= std::min(g.rows - 1, r1); ++r)
             for (int c = std::max(0, c0); c <= std::min(g.cols - 1, c1); ++c)

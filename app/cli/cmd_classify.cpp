@@ -178,7 +178,12 @@ void classifyFile(const ClassifyArgs &a, Io &io) {
             ++rows;
             block->add(reader.record(), readState(reader, cols, a.file.decimalComma));
         } catch (const InputError &e) {
-            if (!a.file.skipBad) throw;
+            if (!a.file.skipBad) {
+                // Rows before this one come first: a failure among them is the one reported.
+                pipeline.submit();
+                pipeline.finish();
+                throw;
+            }
             ++bad;
             io.err << "skipped: " << e.what() << '\n';
             continue;
@@ -219,7 +224,7 @@ void addClassifyCommand(CLI::App &app, Io &io) {
                     "CSV input: threads for classifying and formatting (0: one per core; 1: "
                     "all in one thread); the output is the same for any number")
         ->capture_default_str()
-        ->check(CLI::Range(0, 4096))
+        ->check(CLI::Range(0, 256))
         ->needs(in);
     cmd->callback([a, &io] {
         if (a->file.input.empty())

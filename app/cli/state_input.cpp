@@ -125,6 +125,10 @@ RowState readState(const csv::Reader &reader, const csv::StateColumns &columns, 
     const double t = cellNumber(reader, columns.t, decimalComma);
     const double p = cellNumber(reader, columns.p, decimalComma);
     const double T = toKelvin(t, columns.tUnit), P = toPascal(p, columns.pUnit);
+    if (!std::isfinite(T) || !std::isfinite(P))  // 1e308 kPa overflows in the conversion
+        throw InputError(reader.fileName(), reader.row(),
+                         reader.header()[std::isfinite(T) ? columns.p : columns.t],
+                         "the value is out of range after conversion to K and Pa");
     if (!(T > 0.0))
         throw InputError(reader.fileName(), reader.row(), reader.header()[columns.t],
                          fmt::format("{} {} is not a physical temperature (at or below 0 K)", t,

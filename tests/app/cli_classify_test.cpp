@@ -140,6 +140,15 @@ TEST_F(CliClassify, BadRowAfterManyBlocksLeavesNoFile) {
     EXPECT_EQ(filesInDir(), 1u);
 }
 
+// 1e308 kPa is a finite number but overflows on conversion to Pa: refused, naming the column.
+TEST_F(CliClassify, OverflowAfterUnitConversionIsABadRow) {
+    const std::string in = file("big.csv", "T,P [kPa]\n300,100\n300,1e308\n");
+    const Result r = runCli({"classify", "--substance", "water", "--input", in});
+    EXPECT_EQ(r.code, kExitBadInput);
+    EXPECT_NE(r.err.find("row 3, field 'P [kPa]'"), std::string::npos) << r.err;
+    EXPECT_NE(r.err.find("out of range"), std::string::npos) << r.err;
+}
+
 TEST_F(CliClassify, HeaderOnlyIsAnErrorWithNoOutput) {
     const std::string in = file("empty.csv", "T,P\n");
     const std::string out = (dir_ / "out.csv").string();

@@ -168,17 +168,19 @@ void RunOverlay::drawScale() {
     layout->addElement(layout->rowCount(), 0, scale_);
     layout->setRowStretchFactor(layout->rowCount() - 1, 0.001);
     // Line the bar up with the diagram's axis rect.
-    auto *group = new QCPMarginGroup(&plot);
-    plot.axisRect()->setMarginGroup(QCP::msLeft | QCP::msRight, group);
-    scale_->setMarginGroup(QCP::msLeft | QCP::msRight, group);
+    group_ = new QCPMarginGroup(&plot);
+    plot.axisRect()->setMarginGroup(QCP::msLeft | QCP::msRight, group_);
+    scale_->setMarginGroup(QCP::msLeft | QCP::msRight, group_);
 }
 
 void RunOverlay::removeScale() {
-    if (!scale_) return;
     QCustomPlot &plot = *diagram_.plot();
-    plot.axisRect()->setMarginGroup(QCP::msLeft | QCP::msRight, nullptr);
-    plot.plotLayout()->remove(scale_);
-    plot.plotLayout()->simplify();
+    if (scale_) {
+        plot.axisRect()->setMarginGroup(QCP::msLeft | QCP::msRight, nullptr);
+        plot.plotLayout()->remove(scale_);  // deletes it
+        plot.plotLayout()->simplify();
+    }
+    delete group_;  // one group per key: none left behind by redraws
 }
 
 bool RunOverlay::markerVisible() const {

@@ -12,6 +12,7 @@
 #include "widgets/settings.h"
 
 class QCPColorScale;
+class QCPMarginGroup;
 class QCPGraph;
 class QMouseEvent;
 
@@ -60,7 +61,8 @@ private:
     State marker_;
     QPointer<QCPGraph> sentinel_;  // cleared by renderScene -> redraw
     QPointer<QCPGraph> markerGraph_;
-    QPointer<QCPColorScale> scale_;  // the time key, a layout row under the diagram
+    QPointer<QCPColorScale> scale_;   // the time key, a layout row under the diagram
+    QPointer<QCPMarginGroup> group_;  // lines the key up with the axis rect
     bool hovering_ = false;
 };
 

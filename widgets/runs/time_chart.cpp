@@ -102,7 +102,7 @@ void TimeChart::build() {
     pAxis->setNumberFormat(QStringLiteral("eb"));
     pAxis->setNumberPrecision(0);
     bottom_->axis(QCPAxis::atRight)->setTicker(signedLogTicker(1));
-    connect(plot_, &QCustomPlot::beforeReplot, this, &TimeChart::updateMarginTicks);
+    connect(plot_, &QCustomPlot::afterLayout, this, &TimeChart::updateMarginTicks);
     // The zero line of the margins: the boundary itself.
     auto *zero = new QCPItemStraightLine(plot_);
     zero->setClipAxisRect(bottom_);
@@ -140,6 +140,8 @@ void TimeChart::updateMarginTicks() {
     if (stride == tickStride_) return;
     tickStride_ = stride;
     axis->setTicker(signedLogTicker(stride));
+    // This replot's ticks are already made (before the layout, whose height this needs).
+    plot_->replot(QCustomPlot::rpQueuedReplot);
 }
 
 void TimeChart::setRun(RunPtr run) {
