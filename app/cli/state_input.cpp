@@ -8,6 +8,7 @@
 #include <iostream>
 
 #include "app/cli/substance_arg.h"
+#include "core/csv/number_text.h"
 #include "core/errors.h"
 #include "core/units.h"
 
@@ -102,15 +103,14 @@ InputFile::InputFile(const std::string &path, std::istream &standardInput)
 
 namespace {
 
-// A cell that std::from_chars reads whole as a finite number (so without blanks, a '+' sign
-// or a decimal comma) is the number Reader::number would give; any other cell goes through
-// Reader::number, which names file, row and column when it is not a number.
+// A plain decimal cell (no blanks, '+' sign or decimal comma; core/csv/number_text.h) is the
+// number Reader::number would give; any other cell goes through Reader::number, which names
+// file, row and column when it is not a number.
 double cellNumber(const csv::Reader &reader, std::size_t column, bool decimalComma) {
     if (!decimalComma) {
         const std::string_view cell = reader.field(column);
         double v = 0.0;
-        const auto [ptr, ec] = std::from_chars(cell.data(), cell.data() + cell.size(), v);
-        if (ec == std::errc() && ptr == cell.data() + cell.size() && std::isfinite(v)) return v;
+        if (csv::parseSimpleDecimal(cell.data(), cell.data() + cell.size(), v)) return v;
     }
     return reader.number(column);
 }

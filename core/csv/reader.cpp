@@ -9,6 +9,7 @@
 #include <cstring>
 #include <istream>
 
+#include "core/csv/number_text.h"
 #include "core/errors.h"
 
 namespace pw::csv {
@@ -52,6 +53,10 @@ std::optional<std::string> parseNumber(std::string_view cell, bool decimalComma,
         digits = std::string_view(local.data(), digits.size());
     }
     double v = 0.0;
+    if (!decimalComma && parseSimpleDecimal(digits.data(), digits.data() + digits.size(), v)) {
+        out = v;  // finite: the fast path reads at most 19 digits times 10^(+-22)
+        return std::nullopt;
+    }
     const auto [ptr, ec] = std::from_chars(digits.data(), digits.data() + digits.size(), v);
     if (ec == std::errc::result_out_of_range)
         return fmt::format("'{}' is out of range", shownCell(s));

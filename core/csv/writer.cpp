@@ -5,13 +5,13 @@
 #include <cmath>
 #include <ostream>
 
+#include "core/csv/number_text.h"
 #include "core/errors.h"
 
 namespace pw::csv {
 
 namespace {
 constexpr std::size_t kSlack = 4096;  // room past the flush limit for the row being written
-constexpr std::size_t kNumberBytes = 32;
 }  // namespace
 
 Writer::Writer(std::ostream &out, char delimiter, std::size_t bufferBytes)
@@ -53,9 +53,9 @@ void Writer::putQuoted(std::string_view text) {
 void Writer::field(double value) {
     separate();
     if (std::isnan(value)) return;
-    if (room() < kNumberBytes) grow(kNumberBytes);
+    if (room() < kShortestMaxBytes) grow(kShortestMaxBytes);
     char *start = pos_;
-    pos_ = std::to_chars(pos_, end_, value).ptr;
+    pos_ = writeShortest(pos_, value);
     if (decimalComma_) std::replace(start, pos_, '.', ',');
 }
 

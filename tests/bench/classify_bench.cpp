@@ -3,12 +3,15 @@
 // End to end against Python: tests/bench/classify_vs_python.py.
 #include <benchmark/benchmark.h>
 
+#include <charconv>
 #include <cmath>
+#include <cstdio>
 #include <random>
 #include <sstream>
 #include <vector>
 
 #include "core/classify.h"
+#include "core/csv/number_text.h"
 #include "core/csv/reader.h"
 #include "core/csv/writer.h"
 #include "core/library.h"
@@ -53,6 +56,78 @@ void BM_ClassifyWaterView(benchmark::State &state) {
     state.SetItemsProcessed(state.iterations());
 }
 BENCHMARK(BM_ClassifyWaterView);
+
+// The number conversions of the CSV path: the standard library's and core/csv/number_text.h's
+// (the same results, see tests/core/csv/number_text_test.cpp).
+std::vector<double> marginLikeValues() {
+    std::mt19937_64 rng(3);
+    std::uniform_real_distribution<double> m(-300.0, 300.0), e(-20.0, 20.0);
+    std::vector<double> v(4096);
+    for (double &x : v) x = m(rng) * std::exp(e(rng));
+    return v;
+}
+
+void BM_FormatStdToChars(benchmark::State &state) {
+    const auto values = marginLikeValues();
+    char buf[64];
+    std::size_t i = 0;
+    for (auto _ : state) {
+        benchmark::DoNotOptimize(std::to_chars(buf, buf + sizeof buf, values[i++ & 4095]).ptr);
+        benchmark::ClobberMemory();
+    }
+    state.SetItemsProcessed(state.iterations());
+}
+BENCHMARK(BM_FormatStdToChars);
+
+void BM_FormatShortest(benchmark::State &state) {
+    const auto values = marginLikeValues();
+    char buf[pw::csv::kShortestMaxBytes];
+    std::size_t i = 0;
+    for (auto _ : state) {
+        benchmark::DoNotOptimize(pw::csv::writeShortest(buf, values[i++ & 4095]));
+        benchmark::ClobberMemory();
+    }
+    state.SetItemsProcessed(state.iterations());
+}
+BENCHMARK(BM_FormatShortest);
+
+std::vector<std::string> logLikeText() {
+    std::vector<std::string> v;
+    for (const Point &p : waterPoints(2048)) {
+        char buf[64];
+        std::snprintf(buf, sizeof buf, "%.6f", p.T);
+        v.emplace_back(buf);
+        std::snprintf(buf, sizeof buf, "%.6g", p.P);
+        v.emplace_back(buf);
+    }
+    return v;
+}
+
+void BM_ParseStdFromChars(benchmark::State &state) {
+    const auto text = logLikeText();
+    std::size_t i = 0;
+    for (auto _ : state) {
+        const std::string &s = text[i++ & 4095];
+        double v = 0.0;
+        std::from_chars(s.data(), s.data() + s.size(), v);
+        benchmark::DoNotOptimize(v);
+    }
+    state.SetItemsProcessed(state.iterations());
+}
+BENCHMARK(BM_ParseStdFromChars);
+
+void BM_ParseSimpleDecimal(benchmark::State &state) {
+    const auto text = logLikeText();
+    std::size_t i = 0;
+    for (auto _ : state) {
+        const std::string &s = text[i++ & 4095];
+        double v = 0.0;
+        pw::csv::parseSimpleDecimal(s.data(), s.data() + s.size(), v);
+        benchmark::DoNotOptimize(v);
+    }
+    state.SetItemsProcessed(state.iterations());
+}
+BENCHMARK(BM_ParseSimpleDecimal);
 
 std::string csvText(std::size_t rows) {
     std::string s = "T [K],P [Pa]\n";

@@ -1,0 +1,29 @@
+#pragma once
+// Fast, exact conversions between doubles and text for tables of millions of rows. Both give
+// the very results of the standard library (checked against it on millions of values in
+// tests/core/csv/number_text_test.cpp), only sooner:
+// - writeShortest: the text std::to_chars(first, last, value) gives (the shortest text that
+//   reads back to the same double; fixed or scientific, whichever is shorter, fixed on a tie).
+//   The digits come from the Dragonbox algorithm (Jeon 2020) as built into {fmt}.
+// - parseSimpleDecimal: the correctly rounded value of a plain decimal such as 267.182122 or
+//   1.08286e+07, when the exact fast path applies (Clinger 1990: at most 19 significant
+//   digits forming an integer below 2^53, scaled by 10^k with |k| <= 22: one correctly rounded
+//   IEEE multiplication or division). Anything else returns false; the caller then asks
+//   std::from_chars, which decides.
+#include <cstddef>
+
+namespace pw::csv {
+
+// Room writeShortest needs at `out`: the text is at most 24 bytes ("-2.2250738585072014e-308"),
+// but it writes in fixed-size blocks past the end of the text.
+inline constexpr std::size_t kShortestMaxBytes = 48;
+
+// Writes the shortest round-trip text of `value` at `out` (kShortestMaxBytes of room) and
+// returns the end. Non-finite values give "inf", "-inf" or "nan", as std::to_chars does.
+char *writeShortest(char *out, double value);
+
+// [first, last) as a decimal number (optional '-', digits with an optional '.', an optional
+// exponent), in full; false when the text has another form or needs the slow path.
+bool parseSimpleDecimal(const char *first, const char *last, double &out);
+
+}  // namespace pw::csv

@@ -1,0 +1,170 @@
+// The fast number conversions against the standard library they stand in for: the same text
+// as std::to_chars (C++17 [charconv.to.chars]: shortest round trip, fixed or scientific by
+// length) and the same double as std::from_chars (correct rounding) wherever the fast path
+// answers.
+#include <gtest/gtest.h>
+
+#include <bit>
+#include <charconv>
+#include <cmath>
+#include <cstdint>
+#include <cstdio>
+#include <limits>
+#include <random>
+#include <string>
+
+#include "core/csv/number_text.h"
+
+namespace pw::csv {
+namespace {
+
+std::string standardText(double v) {
+    char buf[64];
+    return {buf, std::to_chars(buf, buf + sizeof buf, v).ptr};
+}
+
+std::string fastText(double v) {
+    char buf[kShortestMaxBytes];
+    return {buf, writeShortest(buf, v)};
+}
+
+TEST(NumberText, ShortestMatchesToCharsOnChosenValues) {
+    const double cases[] = {0.0,
+                            -0.0,
+                            1.0,
+                            -1.0,
+                            0.1,
+                            2.5,
+                            100.0,
+                            1e5,
+                            123456.0,
+                            1e15,
+                            1e16,
+                            1e17,
+                            1e21,
+                            1e22,
+                            1e23,
+                            123456789012345678.0,
+                            1.2345678901234567e20,
+                            0.001,
+                            0.0001,
+                            1.5e-5,
+                            -5.155284711006857,
+                            -59439740.25061531,
+                            611.657,
+                            22.064e6,
+                            1e-100,
+                            1e100,
+                            1.7976931348623157e308,
+                            2.2250738585072014e-308,
+                            4.9406564584124654e-324,
+                            std::numeric_limits<double>::infinity(),
+                            -std::numeric_limits<double>::infinity()};
+    for (double v : cases) EXPECT_EQ(fastText(v), standardText(v)) << v;
+    EXPECT_EQ(fastText(std::numeric_limits<double>::quiet_NaN()), "nan");
+}
+
+TEST(NumberText, ShortestMatchesToCharsOnRandomBitPatterns) {
+    std::mt19937_64 rng(20261202);
+    int compared = 0;
+    for (int i = 0; i < 2'000'000; ++i) {
+        const double v = std::bit_cast<double>(rng());
+        if (!std::isfinite(v)) continue;
+        ASSERT_EQ(fastText(v), standardText(v)) << std::bit_cast<std::uint64_t>(v);
+        ++compared;
+    }
+    EXPECT_GT(compared, 1'990'000);
+}
+
+// Margins as the classifier gives them: any sign, from 1e-12 to 1e10, and round numbers.
+TEST(NumberText, ShortestMatchesToCharsOnMarginLikeValues) {
+    std::mt19937_64 rng(7);
+    std::uniform_real_distribution<double> mantissa(-1000.0, 1000.0), power(-15.0, 10.0);
+    for (int i = 0; i < 1'000'000; ++i) {
+        const double v = mantissa(rng) * std::pow(10.0, std::floor(power(rng)));
+        ASSERT_EQ(fastText(v), standardText(v)) << v;
+        const double round = std::round(v * 1000.0) / 1000.0;
+        ASSERT_EQ(fastText(round), standardText(round)) << round;
+    }
+    for (int k = -323; k <= 308; ++k) {
+        const double p = std::pow(10.0, k);
+        EXPECT_EQ(fastText(p), standardText(p)) << k;
+        EXPECT_EQ(fastText(std::nextafter(p, 0.0)), standardText(std::nextafter(p, 0.0))) << k;
+    }
+}
+
+double standardValue(const std::string &s) {
+    double v = 0.0;
+    std::from_chars(s.data(), s.data() + s.size(), v);
+    return v;
+}
+
+bool fastValue(const std::string &s, double &v) {
+    return parseSimpleDecimal(s.data(), s.data() + s.size(), v);
+}
+
+void expectSameValue(const std::string &s) {
+    double v = 0.0;
+    if (!fastValue(s, v)) return;  // the caller asks std::from_chars
+    ASSERT_EQ(std::bit_cast<std::uint64_t>(v), std::bit_cast<std::uint64_t>(standardValue(s))) << s;
+}
+
+TEST(NumberText, ParsesTheUsualLogTextOnTheFastPath) {
+    for (const char *s : {"267.182122", "1.08286e+07", "-45.5", "0.000123", "611.657", "1e5",
+                          "22064000", "-0", "0.0", "1.", ".5", "1E-3", "3.14e+00"}) {
+        double v = 0.0;
+        EXPECT_TRUE(fastValue(s, v)) << s;
+        EXPECT_EQ(std::bit_cast<std::uint64_t>(v), std::bit_cast<std::uint64_t>(standardValue(s)))
+            << s;
+    }
+}
+
+TEST(NumberText, LeavesEverythingElseToTheStandardParser) {
+    double v = 0.0;
+    for (const char *s : {"",
+                          "-",
+                          ".",
+                          "+1",
+                          " 1",
+                          "1 ",
+                          "1,5",
+                          "nan",
+                          "inf",
+                          "1e",
+                          "1e+",
+                          "1e+x",
+                          "0x10",
+                          "1..2",
+                          "--1",
+                          "1e5.5",
+                          "12345678901234567890",  // 20 digits
+                          "9007199254740993",      // 2^53 + 1: not exact
+                          "1e23",
+                          "1e-23",
+                          "1.5e400"})
+        EXPECT_FALSE(fastValue(s, v)) << s;
+}
+
+TEST(NumberText, FastPathAgreesWithFromCharsOnRandomText) {
+    std::mt19937_64 rng(11);
+    std::uniform_real_distribution<double> mantissa(-1000.0, 1000.0), power(-25.0, 25.0);
+    std::uniform_int_distribution<int> precision(0, 18);
+    char buf[64];
+    int fast = 0;
+    for (int i = 0; i < 300'000; ++i) {
+        const double v = mantissa(rng) * std::pow(10.0, std::floor(power(rng)));
+        const int digits = precision(rng);
+        for (const char *format : {"%.*f", "%.*e", "%.*g"}) {
+            std::snprintf(buf, sizeof buf, format, digits, v);
+            const std::string s(buf);
+            double parsed = 0.0;
+            fast += fastValue(s, parsed) ? 1 : 0;
+            expectSameValue(s);
+        }
+        expectSameValue(standardText(v));
+    }
+    EXPECT_GT(fast, 300'000);  // most of them take the fast path
+}
+
+}  // namespace
+}  // namespace pw::csv
