@@ -150,8 +150,8 @@ void PhaseDiagram::buildSegments() {
             t.max_K = std::min(t.max_K, b.validity.max_K);
         }
         if (!t.valid()) t = seg.T;
-        // Built on the first inverse query on this segment (core/boundary_segment.h).
-        seg.table = LazyInverseTable(b.model, t.min_K, t.max_K);
+        // Built on the first query on this segment (core/boundary_segment.h).
+        seg.table = LazyCurveTable(b.model, t.min_K, t.max_K);
     }
 }
 
@@ -180,7 +180,9 @@ std::optional<BoundaryValue> PhaseDiagram::segmentPressure(int seg, double T_K) 
     const BoundarySegment &s = segments_[static_cast<std::size_t>(seg)];
     if (!s.T.contains(T_K)) return std::nullopt;
     const Boundary &b = boundaryOf(seg);
-    return BoundaryValue{&b, b.model->pressure(T_K), b.extrapolated(T_K)};
+    double p = s.table.pressure(T_K);
+    if (std::isnan(p)) p = b.model->pressure(T_K);  // outside the table: the equation itself
+    return BoundaryValue{&b, p, b.extrapolated(T_K)};
 }
 
 std::optional<BoundaryValue> PhaseDiagram::segmentTemperature(int seg, double P_Pa) const {

@@ -1,6 +1,8 @@
 #include "core/solver.h"
 
+#include <algorithm>
 #include <limits>
+#include <string>
 
 #include "core/errors.h"
 
@@ -8,9 +10,13 @@ namespace pw {
 
 namespace {
 
-// Newton is accepted once its predicted error K·step² is below this (K).
-constexpr double kNewtonTol_K = 1e-11;
-constexpr int kNewtonSteps = 3;
+// The curve tables: cells per table, refinement levels, coarse nodes.
+constexpr int kCells = 256;
+constexpr int kMaxLevel = 7;
+constexpr int kNodes = 256;
+// The exact inverse stops when a Newton step (or the bracket) is below 1e-15 T (about 4 ulp).
+constexpr double kNewtonStopRel = 1e-15;
+constexpr int kMaxNewton = 60;
 
 }  // namespace
 
@@ -30,102 +36,68 @@ std::optional<double> solveTemperature(const BoundaryModel &model, double lnp, d
     return solveBracketed([&](double T) { return lnPressureOf(model, T).lnp - lnp; }, lo, hi);
 }
 
-InverseTable::InverseTable(BoundaryModelPtr model, double T_lo, double T_hi, int intervals)
+CurveTable::CurveTable(BoundaryModelPtr model, double T_lo, double T_hi)
     : model_(std::move(model)), curve_(dynamic_cast<const CurveModel *>(model_.get())) {
-    const LnPressure a = eval(T_lo);
-    const LnPressure b = eval(T_hi);
-    if (!(std::isfinite(a.lnp) && std::isfinite(b.lnp)) || a.lnp == b.lnp || intervals < 2) {
-        throw DomainError("inverse table: the curve '" + std::string(model_->form()) +
-                          "' is not monotonic and finite on its segment");
+    // Coarse nodes, even in T: the monotonicity check and the brackets of the exact inverse.
+    nodeT_.resize(kNodes + 1);
+    nodeLnp_.resize(kNodes + 1);
+    for (int k = 0; k <= kNodes; ++k) {
+        nodeT_[k] = k == kNodes ? T_hi : T_lo + (T_hi - T_lo) * k / kNodes;
+        nodeLnp_[k] = exact(nodeT_[k]).lnp;
     }
-    const bool rising = b.lnp > a.lnp;
-    lnpMin_ = std::min(a.lnp, b.lnp);
-    lnpMax_ = std::max(a.lnp, b.lnp);
-    const double step = (lnpMax_ - lnpMin_) / intervals;
-    invStep_ = 1.0 / step;
-    T_.resize(static_cast<std::size_t>(intervals) + 1);
-    m_.resize(T_.size());
-    std::vector<double> slope(T_.size());
-    const double Tend = rising ? T_hi : T_lo;
-    const double infinity = std::numeric_limits<double>::infinity();
-    for (std::size_t k = 0; k < T_.size(); ++k) {
-        double T = k == 0 ? (rising ? T_lo : T_hi) : Tend;
-        if (k > 0 && k + 1 < T_.size()) {
-            const double target = lnpMin_ + step * static_cast<double>(k);
-            const double guess = std::clamp(T_[k - 1] + m_[k - 1], std::min(T_[k - 1], Tend),
-                                            std::max(T_[k - 1], Tend));
-            T = refine(target, guess, std::min(T_[k - 1], Tend), std::max(T_[k - 1], Tend),
-                       infinity, 0.0);
+    const bool rising = nodeLnp_.back() > nodeLnp_.front();
+    for (int k = 0; k < kNodes; ++k) {
+        const double step = nodeLnp_[k + 1] - nodeLnp_[k];
+        if (!std::isfinite(nodeLnp_[k]) || !std::isfinite(nodeLnp_[k + 1]) ||
+            !(rising ? step > 0.0 : step < 0.0)) {
+            throw DomainError("curve table: the curve '" +
+                              std::string(curve_ ? curve_->form() : "") +
+                              "' is not monotonic and finite on its segment");
         }
-        T_[k] = T;
-        slope[k] = eval(T).slope;
-        m_[k] = step / slope[k];
     }
-    errK_.resize(T_.size() - 1);
-    for (std::size_t k = 0; k + 1 < T_.size(); ++k) {
-        const double dT = T_[k + 1] - T_[k];
-        const double g2 = dT != 0.0 ? (slope[k + 1] - slope[k]) / dT : infinity;
-        const double g1 = std::min(std::abs(slope[k]), std::abs(slope[k + 1]));
-        // Safety factor 10 over the finite-difference estimate of |g''| / (2 |g'|).
-        errK_[k] = 10.0 * std::abs(g2) / (2.0 * g1);
-        if (!std::isfinite(errK_[k])) errK_[k] = infinity;
-        // Measure the Hermite error inside the interval against the exact inverse.
-        const double lo = std::min(T_[k], T_[k + 1]);
-        const double hi = std::max(T_[k], T_[k + 1]);
-        double worst = 0.0;
-        for (double t : {0.25, 0.5, 0.75}) {
-            const double target = lnpMin_ + step * (static_cast<double>(k) + t);
-            const double h = hermite(k, t);
-            worst = std::max(worst, std::abs(refine(target, h, lo, hi, infinity, 0.0) - h));
-        }
-        if (worst <= kTableExact_K) errK_[k] = -1.0;
+    if (!rising) {
+        std::reverse(nodeT_.begin(), nodeT_.end());
+        std::reverse(nodeLnp_.begin(), nodeLnp_.end());
     }
+    T_lo_ = T_lo;
+    T_hi_ = T_hi;
+    lnpMin_ = nodeLnp_.front();
+    lnpMax_ = nodeLnp_.back();
+    inLnP_ = model_->smoothInLnPressure();
+    if (inLnP_) {
+        forward_ = PolyTable([this](double T) { return exact(T).lnp; }, T_lo, T_hi,
+                             {kCells, kMaxLevel, kTableLnpAbs, kTableLnpRel});
+    } else {
+        forward_ = PolyTable([this](double T) { return model_->pressure(T); }, T_lo, T_hi,
+                             {kCells, kMaxLevel, 0.0, kTableLnpAbs});
+    }
+    inverse_ = PolyTable([this](double lnp) { return exactTemperature(lnp); }, lnpMin_, lnpMax_,
+                         {kCells, kMaxLevel, kTableExact_K, 0.0});
 }
 
-double InverseTable::hermite(std::size_t i, double t) const {
-    const double t2 = t * t, t3 = t2 * t;
-    return (2 * t3 - 3 * t2 + 1) * T_[i] + (t3 - 2 * t2 + t) * m_[i] +
-           (-2 * t3 + 3 * t2) * T_[i + 1] + (t3 - t2) * m_[i + 1];
-}
-
-double InverseTable::refine(double lnp, double T, double lo, double hi, double errK,
-                            double tolK) const {
-    const int steps = std::isfinite(errK) ? kNewtonSteps : 20;
-    T = std::clamp(T, lo, hi);
-    for (int iter = 0; iter < steps; ++iter) {
-        const LnPressure e = eval(T);
+double CurveTable::exactTemperature(double lnp) const {
+    const auto it = std::upper_bound(nodeLnp_.begin(), nodeLnp_.end(), lnp);
+    const auto k = static_cast<std::size_t>(
+        std::clamp<std::ptrdiff_t>(it - nodeLnp_.begin() - 1, 0, kNodes - 1));
+    double lo = std::min(nodeT_[k], nodeT_[k + 1]);
+    double hi = std::max(nodeT_[k], nodeT_[k + 1]);
+    const double span = nodeLnp_[k + 1] - nodeLnp_[k];
+    double T = nodeT_[k] + (nodeT_[k + 1] - nodeT_[k]) * (lnp - nodeLnp_[k]) / span;
+    for (int iter = 0; iter < kMaxNewton; ++iter) {
+        const LnPressure e = exact(T);
         const double g = e.lnp - lnp;
         if (g == 0.0) return T;
-        // Shrink the bracket with the sign of g (ln p rises with T when slope > 0).
         if ((g > 0.0) == (e.slope > 0.0)) {
             hi = T;
         } else {
             lo = T;
         }
-        const double stepT = g / e.slope;
-        const double next = T - stepT;
-        if (!(next >= lo && next <= hi)) break;
+        double next = T - g / e.slope;
+        if (!(next > lo && next < hi)) next = 0.5 * (lo + hi);  // bisect: Newton left the bracket
+        if (std::abs(next - T) <= kNewtonStopRel * T || hi - lo <= kNewtonStopRel * T) return next;
         T = next;
-        // Quadratic convergence: the error after the step is about errK·step².
-        if (std::isfinite(errK) ? errK * stepT * stepT <= tolK
-                                : std::abs(stepT) <= kSolverRelTol * T) {
-            return T;
-        }
     }
-    return solveTemperature(*model_, lnp, lo, hi).value_or(0.5 * (lo + hi));
-}
-
-std::optional<double> InverseTable::temperature(double lnp) const {
-    if (T_.empty()) return std::nullopt;
-    const double x = (lnp - lnpMin_) * invStep_;
-    const std::size_t n = T_.size() - 1;
-    if (!(x >= 0.0 && x <= static_cast<double>(n))) return std::nullopt;
-    const std::size_t i = std::min(static_cast<std::size_t>(x), n - 1);
-    const double T = hermite(i, x - static_cast<double>(i));
-    const double lo = std::min(T_[i], T_[i + 1]);
-    const double hi = std::max(T_[i], T_[i + 1]);
-    if (errK_[i] < 0.0) return std::clamp(T, lo, hi);
-    return refine(lnp, T, lo, hi, errK_[i], kNewtonTol_K);
+    return T;
 }
 
 }  // namespace pw

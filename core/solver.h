@@ -1,33 +1,39 @@
 #pragma once
-// Inverse of a monotone boundary curve: T(p).
+// Inverse of a monotone boundary curve, T(p), and the fast tables of a curve segment.
 //
 // solveBracketed(): TOMS748 (Alefeld, Potra & Shi 1995, Boost.Math) on a bracket whose ends
 // have opposite signs; guaranteed to converge, never leaves the bracket.
 //
-// InverseTable: the fast path for repeated queries on one curve segment. A table of T at
-// points evenly spaced in ln p (exact node values, with the exact slopes dT/d(ln p)) gives a
-// cubic-Hermite value. Intervals whose Hermite error, measured at construction against the
-// exact inverse at t = 1/4, 1/2, 3/4, is below kTableExact_K answer from the table alone.
-// Elsewhere safeguarded Newton steps on ln p(T) − ln p refine the value inside the node
-// bracket (the two nodes enclose the root because the curve is monotonic); a step that leaves
-// the bracket, or no convergence in three steps, falls back to TOMS748 on that bracket.
+// CurveTable: the fast path for repeated queries on one curve segment, both ways: p(T) and
+// T(ln p) as piecewise polynomials (core/poly_table.h) whose error was measured against the
+// equation when built, at the points where the error peaks: p within about 1e-13 relative
+// (kTableLnpAbs, kTableLnpRel: the table holds ln p or p, whichever is the smoother function
+// of T for the form), T within kTableExact_K. The exact inverse behind the table is safeguarded
+// Newton on ln p(T) (the curve is monotonic on the segment); where a table cell missed its
+// tolerance (next to a critical point, where the equations have a fractional power of T_c - T)
+// queries solve the equation itself.
 #include <algorithm>
 #include <boost/math/tools/toms748_solve.hpp>
 #include <cmath>
 #include <cstdint>
+#include <limits>
 #include <optional>
 #include <vector>
 
 #include "core/boundary_model.h"
 #include "core/models/curve.h"
+#include "core/poly_table.h"
 
 namespace pw {
 
 // Bracket width at which TOMS748 stops: 1e-13 relative (7e-11 K at 700 K).
 inline constexpr double kSolverRelTol = 1e-13;
-// Largest measured Hermite error (K) for which a table interval needs no refinement: a
-// hundredth of the 1e-9 K guarantee.
+// Error the inverse table allows (K): a hundredth of the 1e-9 K guarantee.
 inline constexpr double kTableExact_K = 1e-11;
+// Error the forward table allows in ln p: 1e-13 plus 1e-15 |ln p| (about 1e-13 relative in p);
+// a table of p itself allows kTableLnpAbs relative.
+inline constexpr double kTableLnpAbs = 1e-13;
+inline constexpr double kTableLnpRel = 1e-15;
 
 // Root of f on [lo, hi]; nullopt when f(lo), f(hi) do not bracket a root (or are NaN).
 template <class F>
@@ -52,33 +58,52 @@ LnPressure lnPressureOf(const BoundaryModel &model, double T);
 std::optional<double> solveTemperature(const BoundaryModel &model, double lnp, double lo,
                                        double hi);
 
-class InverseTable {
+class CurveTable {
 public:
-    InverseTable() = default;
-    // Table over [T_lo, T_hi] (inside the model's domain, where the curve is monotonic).
-    InverseTable(BoundaryModelPtr model, double T_lo, double T_hi, int intervals = 4096);
+    CurveTable() = default;
+    // Tables over [T_lo, T_hi] (inside the model's domain, where the curve is monotonic).
+    // Throws DomainError when the curve is not finite and monotonic there.
+    CurveTable(BoundaryModelPtr model, double T_lo, double T_hi);
 
-    bool empty() const { return T_.empty(); }
-    // ln p range covered by the table.
-    double lnpMin() const { return lnpMin_; }
+    bool empty() const { return model_ == nullptr; }
+    double lnpMin() const { return lnpMin_; }  // ln p range covered
     double lnpMax() const { return lnpMax_; }
     // T at ln p; nullopt outside [lnpMin, lnpMax].
-    std::optional<double> temperature(double lnp) const;
+    std::optional<double> temperature(double lnp) const {
+        if (!(lnp >= lnpMin_ && lnp <= lnpMax_)) return std::nullopt;
+        const double T = inverse_(lnp);
+        if (!std::isnan(T)) return std::clamp(T, T_lo_, T_hi_);
+        return exactTemperature(lnp);
+    }
+    // p at T (Pa); NaN outside [T_lo, T_hi].
+    double pressure(double T) const {
+        if (!(T >= T_lo_ && T <= T_hi_)) return std::numeric_limits<double>::quiet_NaN();
+        const double v = forward_(T);
+        if (std::isnan(v)) return model_->pressure(T);
+        return inLnP_ ? std::exp(v) : v;
+    }
+    // The tables themselves (tests and benchmarks).
+    const PolyTable &forward() const { return forward_; }
+    const PolyTable &inverse() const { return inverse_; }
 
 private:
-    double hermite(std::size_t i, double t) const;
-    // Newton from T0 inside [lo, hi] until the step is below tolK (or TOMS748).
-    double refine(double lnp, double T0, double lo, double hi, double errK, double tolK) const;
-    LnPressure eval(double T) const {
+    LnPressure exact(double T) const {
         return curve_ != nullptr ? curve_->lnPressure(T) : lnPressureOf(*model_, T);
     }
+    // Safeguarded Newton inside [T_lo, T_hi] from a guess by the coarse node table.
+    double exactTemperature(double lnp) const;
 
     BoundaryModelPtr model_;
     const CurveModel *curve_ = nullptr;
-    double lnpMin_ = 0.0, lnpMax_ = 0.0, invStep_ = 0.0;
-    std::vector<double> T_;     // node temperatures
-    std::vector<double> m_;     // node slopes dT/d(ln p) times the node spacing
-    std::vector<double> errK_;  // per interval: bound on |g''/(2 g')| (Newton error factor)
+    // Empty: ranges no value is in.
+    double T_lo_ = std::numeric_limits<double>::infinity();
+    double T_hi_ = -std::numeric_limits<double>::infinity();
+    double lnpMin_ = std::numeric_limits<double>::infinity();
+    double lnpMax_ = -std::numeric_limits<double>::infinity();
+    std::vector<double> nodeT_, nodeLnp_;  // coarse (T, ln p) nodes, by increasing ln p
+    bool inLnP_ = true;                    // forward_ holds ln p (else p)
+    PolyTable forward_;                    // ln p(T) or p(T): BoundaryModel::smoothInLnPressure
+    PolyTable inverse_;                    // T(ln p)
 };
 
 }  // namespace pw

@@ -103,7 +103,7 @@ void temperatureBench(benchmark::State &state, const Case &c) {
 
 void tableBench(benchmark::State &state, const Case &c) {
     const auto m = pw::makeModel(c.spec);
-    const pw::InverseTable table(m, c.Tmin, c.Tmax);
+    const pw::CurveTable table(m, c.Tmin, c.Tmax);
     std::vector<double> lnp;
     for (double T : spread(c.Tmin, c.Tmax)) lnp.push_back(std::log(m->pressure(T)));
     std::size_t i = 0;

@@ -33,7 +33,7 @@ const Boundary &sublimationOf(const PhaseDiagram &d) {
     return *b;
 }
 
-TEST(LazyInverseTable, ConcurrentFirstUseGivesTheSingleThreadedValues) {
+TEST(LazyCurveTable, ConcurrentFirstUseGivesTheSingleThreadedValues) {
     const PhaseDiagram reference{testdata::water()};
     const std::vector<double> expected = allTemperatures(reference);
     ASSERT_GE(expected.size(), kPressures.size());
@@ -45,7 +45,7 @@ TEST(LazyInverseTable, ConcurrentFirstUseGivesTheSingleThreadedValues) {
     for (const auto &r : results) EXPECT_EQ(r, expected);  // bit for bit
 }
 
-TEST(LazyInverseTable, IceSublimationTemperatureMatchesTheR14CheckValue) {
+TEST(LazyCurveTable, IceSublimationTemperatureMatchesTheR14CheckValue) {
     const PhaseDiagram d{testdata::water()};
     // IAPWS R14-08(2011), check values: sublimation pressure 8.94735e-6 MPa at 230 K.
     const auto T = d.sublimationTemperature(8.94735);
@@ -53,7 +53,7 @@ TEST(LazyInverseTable, IceSublimationTemperatureMatchesTheR14CheckValue) {
     EXPECT_NEAR(T->value, 230.0, 1e-4);
 }
 
-TEST(LazyInverseTable, CopiesBeforeAndAfterFirstUseAgree) {
+TEST(LazyCurveTable, CopiesBeforeAndAfterFirstUseAgree) {
     const PhaseDiagram reference{testdata::water()};
     const std::vector<double> expected = allTemperatures(reference);
     auto original = std::make_unique<PhaseDiagram>(testdata::water());
@@ -76,22 +76,22 @@ TEST(LazyInverseTable, CopiesBeforeAndAfterFirstUseAgree) {
     }
 }
 
-TEST(LazyInverseTable, BuildsOnFirstQueryAndSharesWithLaterCopies) {
+TEST(LazyCurveTable, BuildsOnFirstQueryAndSharesWithLaterCopies) {
     const PhaseDiagram d{testdata::water()};
     const Boundary &b = sublimationOf(d);
-    const LazyInverseTable lazy(b.model, b.validity.min_K, b.validity.max_K);
+    const LazyCurveTable lazy(b.model, b.validity.min_K, b.validity.max_K);
     EXPECT_FALSE(lazy.built());
-    const LazyInverseTable early(lazy);
+    const LazyCurveTable early(lazy);
     const double lnp = std::log(8.94735);
-    const InverseTable eager(b.model, b.validity.min_K, b.validity.max_K);
+    const CurveTable eager(b.model, b.validity.min_K, b.validity.max_K);
     EXPECT_EQ(lazy.temperature(lnp), eager.temperature(lnp));
     EXPECT_TRUE(lazy.built());
     EXPECT_FALSE(early.built());  // builds its own on first use
-    const LazyInverseTable late(lazy);
+    const LazyCurveTable late(lazy);
     EXPECT_TRUE(late.built());
     EXPECT_EQ(&late.get(), &lazy.get());
     EXPECT_EQ(early.temperature(lnp), eager.temperature(lnp));
-    EXPECT_FALSE(LazyInverseTable().temperature(lnp));  // no model: no table
+    EXPECT_FALSE(LazyCurveTable().temperature(lnp));  // no model: no table
 }
 
 }  // namespace
