@@ -2,6 +2,8 @@
 
 #include <fmt/format.h>
 
+#include <algorithm>
+#include <array>
 #include <bit>
 #include <charconv>
 #include <cmath>
@@ -16,16 +18,24 @@ constexpr char kPairs[] =
     "40414243444546474849505152535455565758596061626364656667686970717273747576777879"
     "8081828384858687888990919293949596979899";
 
+// The eight decimal digits of v < 10^8, leading zeros included, as ASCII in the bytes of a
+// 64-bit word, first digit in the lowest byte: three rounds that split every lane in two
+// (10^4, then 100, then 10), each a multiplication by a rounded-up reciprocal that is exact
+// over the lane's range (q = floor(w * ceil(2^s / d) / 2^s) = floor(w / d): checked for
+// all 10^8 values once, and on a sample by tests/core/csv/number_text_test.cpp).
 // Two digits of v (v < 100) at out.
 void putPair(char *out, std::uint32_t v) { std::memcpy(out, kPairs + 2 * v, 2); }
 
-// Eight digits of v (v < 10^8), leading zeros included.
-void putEight(char *out, std::uint32_t v) {
-    const std::uint32_t hi = v / 10000, lo = v % 10000;
-    putPair(out, hi / 100);
-    putPair(out + 2, hi % 100);
-    putPair(out + 4, lo / 100);
-    putPair(out + 6, lo % 100);
+std::uint64_t eightDigits(std::uint32_t v) {
+    const std::uint64_t q = (std::uint64_t{v} * 109951163) >> 40;          // v / 10^4
+    std::uint64_t x = q | ((v - q * 10000) << 32);                         // lanes of 32 bits
+    const std::uint64_t q2 = ((x * 10486) >> 20) & 0x0000007F0000007Full;  // w / 100
+    x = q2 | ((x - q2 * 100) << 16);                                       // lanes of 16 bits
+    const std::uint64_t q3 = ((x * 103) >> 10) & 0x000F000F000F000Full;    // w / 10
+    x = q3 | ((x - q3 * 10) << 8);                                         // one digit a byte
+    x |= 0x3030303030303030ull;
+    if constexpr (std::endian::native == std::endian::big) x = __builtin_bswap64(x);
+    return x;
 }
 
 constexpr std::uint64_t kPow10Int[] = {1ull,
@@ -48,6 +58,8 @@ constexpr std::uint64_t kPow10Int[] = {1ull,
                                        100000000000000000ull,
                                        1000000000000000000ull};
 
+constexpr int kDigitsEnd = 17;  // digitsOf writes 17 digits
+
 // How many decimal digits m has (0 < m < 10^18).
 int digitCount(std::uint64_t m) {
     const int bits = 64 - std::countl_zero(m);
@@ -55,16 +67,16 @@ int digitCount(std::uint64_t m) {
     return t + 1 - (m < kPow10Int[t] ? 1 : 0);
 }
 
-// The digits of m (0 < m < 10^18) as 18 digits with leading zeros: the same work for every
-// number, so no branch depends on its length. Returns the number of significant digits, which
-// end at buf + 18.
-int digitsOf(char *buf, std::uint64_t m) {
-    const auto high = static_cast<std::uint32_t>(m / 10000000000000000ull);  // < 100
-    const std::uint64_t low = m % 10000000000000000ull;
-    putPair(buf, high);
-    putEight(buf + 2, static_cast<std::uint32_t>(low / 100000000));
-    putEight(buf + 10, static_cast<std::uint32_t>(low % 100000000));
-    return digitCount(m);
+// The digits of m (0 < m < 10^17) as 17 digits with leading zeros: the same work for every
+// number, so no branch depends on its length. The significant digits end at buf + 17.
+void digitsOf(char *buf, std::uint64_t m) {
+    const std::uint64_t top = m / 10000000000000000ull;  // < 10
+    const std::uint64_t rest = m % 10000000000000000ull;
+    buf[0] = static_cast<char>('0' + top);
+    const std::uint64_t high = eightDigits(static_cast<std::uint32_t>(rest / 100000000));
+    const std::uint64_t low = eightDigits(static_cast<std::uint32_t>(rest % 100000000));
+    std::memcpy(buf + 1, &high, 8);
+    std::memcpy(buf + 9, &low, 8);
 }
 
 // The writers below copy fixed-size blocks (kCopy bytes) and then move the end back: the
@@ -89,12 +101,13 @@ char *scientific(char *out, const char *digits, int n, int exponent) {
     return out + 4;
 }
 
-// digits × 10^(point - n) written without an exponent (at most 5 zeros are ever added:
-// scientific is shorter beyond that).
+// digits × 10^(point - n) written without an exponent: at most 16 zeros after the digits
+// (shortest text: 5, beyond that scientific is shorter; n significant digits: n - 1) and at
+// most 6 after "0." (shortest: 4; general format: 3).
 char *fixed(char *out, const char *digits, int n, int point) {
     if (point >= n) {  // an integer: the digits, then zeros
         std::memcpy(out, digits, kCopy);
-        std::memset(out + n, '0', 8);
+        std::memset(out + n, '0', 16);
         return out + point;
     }
     if (point > 0) {  // the point falls among the digits
@@ -114,6 +127,17 @@ constexpr int kMaxPow10 = 22;                    // 10^22 is the largest power o
 constexpr std::uint64_t kExactInt = 1ull << 53;  // integers up to this convert exactly
 constexpr double kExactIntDouble = 9007199254740992.0;  // 2^53
 constexpr int kMaxDigits = 19;                          // digits that always fit in 64 bits
+
+// writeSignificant's fast path: up to 13 digits (s < 10^13, so its rounding error, below
+// 10^13 2^-53 ~ 1.1e-3, stays well inside kHalfwayMargin), normal numbers whose exponent
+// estimate stays in the table below.
+constexpr int kMaxSignificant = 17;
+constexpr int kFastSignificant = 13;
+constexpr double kHalfwayMargin = 1e-2;
+constexpr double kSmallestNormal = 2.2250738585072014e-308;
+constexpr double kLargestFast = 1e300;
+// a 10^k for |k| <= kMaxPow10, rounded once.
+double scaled(double a, int k) { return k >= 0 ? a * kPow10[k] : a / kPow10[-k]; }
 
 bool isDigit(char c) { return c >= '0' && c <= '9'; }
 
@@ -136,9 +160,10 @@ char *writeShortest(char *out, double value) {
         m /= 10;
         ++e;
     }
-    char buf[18 + kCopy];
-    const int n = digitsOf(buf, m);
-    const char *digits = buf + 18 - n;
+    char buf[kDigitsEnd + kCopy];
+    digitsOf(buf, m);
+    const int n = digitCount(m);
+    const char *digits = buf + kDigitsEnd - n;
     const int point = n + e;  // value = 0.d1d2...dn × 10^point
     const int exponent = point - 1;
     const int sciLength = n + (n > 1 ? 1 : 0) + 2 + (std::abs(exponent) >= 100 ? 3 : 2);
@@ -151,6 +176,52 @@ char *writeShortest(char *out, double value) {
         return fixed(out, digits, n, point);
     }
     return scientific(out, digits, n, exponent);
+}
+
+char *writeSignificant(char *out, double value, int digits) {
+    digits = std::clamp(digits, 1, kMaxSignificant);
+    const double a = std::abs(value);
+    if (digits <= kFastSignificant && a >= kSmallestNormal && a <= kLargestFast) {
+        // X, the exponent of the leading digit, from the binary exponent (it is X0 or X0 + 1),
+        // then s = a 10^(digits - 1 - X) in one correctly rounded operation with an exact
+        // power of ten: its error, below 2^-53 s, is far less than kHalfwayMargin.
+        const int e2 = static_cast<int>((std::bit_cast<std::uint64_t>(a) >> 52) & 0x7ff) - 1023;
+        int X = (e2 * 1233) >> 12;  // floor(e2 log10 2), up to 1233/4096 ~ log10 2
+        int k = digits - 1 - X;
+        if (k > -kMaxPow10 && k <= kMaxPow10) {
+            double s = scaled(a, k);
+            if (s >= kPow10[digits]) {
+                ++X;
+                s = scaled(a, --k);
+            }
+            // s is positive and below 2^53: truncation is floor, and s - whole is exact.
+            const double whole = static_cast<double>(static_cast<std::uint64_t>(s));
+            const double frac = s - whole;
+            if (whole >= kPow10[digits - 1] && whole < kPow10[digits] &&
+                std::abs(frac - 0.5) > kHalfwayMargin) {
+                auto m = static_cast<std::uint64_t>(whole) + (frac > 0.5 ? 1 : 0);
+                if (m == kPow10Int[digits]) {  // 9.99...95 rounded up to 10.0...0
+                    m = kPow10Int[digits - 1];
+                    ++X;
+                }
+                int n = digits;
+                while (m % 10 == 0) {  // %g drops trailing zeros
+                    m /= 10;
+                    --n;
+                }
+                if (std::signbit(value)) *out++ = '-';
+                char buf[kDigitsEnd + kCopy];
+                digitsOf(buf, m);
+                const char *text = buf + kDigitsEnd - n;
+                if (X >= -4 && X < digits) return fixed(out, text, n, X + 1);
+                return scientific(out, text, n, X);
+            }
+        }
+    }
+    // Zero, subnormal, huge or too many digits for the fast path, or a value next to a
+    // rounding tie: the standard library decides.
+    return std::to_chars(out, out + kShortestMaxBytes, value, std::chars_format::general, digits)
+        .ptr;
 }
 
 bool parseSimpleDecimal(const char *p, const char *last, double &out) {

@@ -5,6 +5,7 @@
 // - writeShortest: the text std::to_chars(first, last, value) gives (the shortest text that
 //   reads back to the same double; fixed or scientific, whichever is shorter, fixed on a tie).
 //   The digits come from the Dragonbox algorithm (Jeon 2020) as built into {fmt}.
+// - writeSignificant: the text of printf's %.Ng (std::to_chars with chars_format::general).
 // - parseSimpleDecimal: the correctly rounded value of a plain decimal such as 267.182122 or
 //   1.08286e+07, when the exact fast path applies (Clinger 1990: at most 19 significant
 //   digits forming an integer below 2^53, scaled by 10^k with |k| <= 22: one correctly rounded
@@ -21,6 +22,13 @@ inline constexpr std::size_t kShortestMaxBytes = 48;
 // Writes the shortest round-trip text of `value` at `out` (kShortestMaxBytes of room) and
 // returns the end. Non-finite values give "inf", "-inf" or "nan", as std::to_chars does.
 char *writeShortest(char *out, double value);
+
+// Writes `value` rounded to `digits` significant digits (1 to 17), the text
+// std::to_chars(out, out + kShortestMaxBytes, value, std::chars_format::general, digits)
+// gives (printf's %.*g: trailing zeros dropped; scientific below 1e-4 and from 10^digits);
+// `out` needs kShortestMaxBytes of room. Up to 13 digits a fast path scales by an exact power
+// of ten and leaves values next to a rounding tie to the standard library.
+char *writeSignificant(char *out, double value, int digits);
 
 // [first, last) as a decimal number (optional '-', digits with an optional '.', an optional
 // exponent), in full; false when the text has another form or needs the slow path.

@@ -55,7 +55,7 @@ void Writer::field(double value) {
     if (std::isnan(value)) return;
     if (room() < kShortestMaxBytes) grow(kShortestMaxBytes);
     char *start = pos_;
-    pos_ = writeShortest(pos_, value);
+    pos_ = digits_ > 0 ? writeSignificant(pos_, value, digits_) : writeShortest(pos_, value);
     if (decimalComma_) std::replace(start, pos_, '.', ',');
 }
 

@@ -1,7 +1,8 @@
 #pragma once
 // A buffered writer for delimited text: fields are appended to one large buffer and handed to
 // the stream in big blocks; numbers are formatted as the shortest text that reads back to the
-// same double (the text std::to_chars gives). Errors of the stream are reported by flush() as
+// same double (the text std::to_chars gives), or rounded to a set number of significant
+// digits (printf's %.Ng). Errors of the stream are reported by flush() as
 // pw::Error. The per-field paths are inline: a million-row table calls them ten million times.
 #include <cstddef>
 #include <cstring>
@@ -27,6 +28,9 @@ public:
     // Numbers written with a decimal comma (12,5), for files read with one (';' or tab
     // separated: the caller makes sure the separator is not ',').
     void setDecimalComma(bool on) { decimalComma_ = on; }
+    // Numbers rounded to this many significant digits (1 to 17); 0, the default: the shortest
+    // text that reads back to the same double.
+    void setSignificantDigits(int digits) { digits_ = digits; }
     // Text that is already a row's fields (e.g. an input record passed through).
     void raw(std::string_view text) {
         separate();
@@ -39,6 +43,19 @@ public:
             putQuoted(text);
         else
             put(text);
+    }
+    // One field the caller has checked once with needsQuotes() (a fixed set of labels): no
+    // per-row scan.
+    void fieldVerbatim(std::string_view text) {
+        separate();
+        put(text);
+    }
+    // Whether field() would quote `text` with this writer's separator.
+    bool needsQuotes(std::string_view text) const {
+        // One pass over the (short) field: cheaper than a search per special character.
+        for (const char c : text)
+            if (c == delimiter_ || c == '"' || c == '\n' || c == '\r') return true;
+        return false;
     }
     // One number; NaN gives an empty field.
     void field(double value);
@@ -64,12 +81,6 @@ private:
         if (!rowStart_) put(delimiter_);
         rowStart_ = false;
     }
-    bool needsQuotes(std::string_view text) const {
-        // One pass over the (short) field: cheaper than a search per special character.
-        for (const char c : text)
-            if (c == delimiter_ || c == '"' || c == '\n' || c == '\r') return true;
-        return false;
-    }
     void put(char c) {
         if (pos_ == end_) grow(1);
         *pos_++ = c;
@@ -90,6 +101,7 @@ private:
     char *end_ = nullptr;
     bool rowStart_ = true;
     bool decimalComma_ = false;
+    int digits_ = 0;
 };
 
 }  // namespace pw::csv

@@ -59,11 +59,16 @@ BENCHMARK(BM_ClassifyWaterView);
 
 // The number conversions of the CSV path: the standard library's and core/csv/number_text.h's
 // (the same results, see tests/core/csv/number_text_test.cpp).
+// Margins as the classifier gives them: dT_K within +-400 K, dP_Pa from 1e-3 Pa to 200 MPa
+// in size, either sign.
 std::vector<double> marginLikeValues() {
     std::mt19937_64 rng(3);
-    std::uniform_real_distribution<double> m(-300.0, 300.0), e(-20.0, 20.0);
+    std::uniform_real_distribution<double> dT(-400.0, 400.0), lnP(std::log(1e-3), std::log(2e8));
     std::vector<double> v(4096);
-    for (double &x : v) x = m(rng) * std::exp(e(rng));
+    for (std::size_t i = 0; i < v.size(); i += 2) {
+        v[i] = dT(rng);
+        v[i + 1] = (rng() & 1 ? 1.0 : -1.0) * std::exp(lnP(rng));
+    }
     return v;
 }
 
@@ -90,6 +95,33 @@ void BM_FormatShortest(benchmark::State &state) {
     state.SetItemsProcessed(state.iterations());
 }
 BENCHMARK(BM_FormatShortest);
+
+// Margins as `classify --input` writes them by default: 12 significant digits.
+void BM_FormatSignificant12(benchmark::State &state) {
+    const auto values = marginLikeValues();
+    char buf[pw::csv::kShortestMaxBytes];
+    std::size_t i = 0;
+    for (auto _ : state) {
+        benchmark::DoNotOptimize(pw::csv::writeSignificant(buf, values[i++ & 4095], 12));
+        benchmark::ClobberMemory();
+    }
+    state.SetItemsProcessed(state.iterations());
+}
+BENCHMARK(BM_FormatSignificant12);
+
+void BM_FormatStdGeneral12(benchmark::State &state) {
+    const auto values = marginLikeValues();
+    char buf[64];
+    std::size_t i = 0;
+    for (auto _ : state) {
+        benchmark::DoNotOptimize(
+            std::to_chars(buf, buf + sizeof buf, values[i++ & 4095], std::chars_format::general, 12)
+                .ptr);
+        benchmark::ClobberMemory();
+    }
+    state.SetItemsProcessed(state.iterations());
+}
+BENCHMARK(BM_FormatStdGeneral12);
 
 std::vector<std::string> logLikeText() {
     std::vector<std::string> v;

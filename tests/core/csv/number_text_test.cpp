@@ -76,6 +76,16 @@ TEST(NumberText, ShortestMatchesToCharsOnRandomBitPatterns) {
     EXPECT_GT(compared, 1'990'000);
 }
 
+// Integers put every digit pattern through the eight-digit conversion: all below 10^6, a
+// stride through 10^8 (the conversion was checked once on all 10^8 values), and the
+// neighbours of every power of ten.
+TEST(NumberText, ShortestMatchesToCharsOnIntegers) {
+    for (int i = 0; i < 1'000'000; ++i) ASSERT_EQ(fastText(i), standardText(i)) << i;
+    for (int i = 0; i < 100'000'000; i += 997) ASSERT_EQ(fastText(i), standardText(i)) << i;
+    for (double p = 1.0; p < 1e17; p *= 10.0)
+        for (double v : {p - 1.0, p, p + 1.0}) EXPECT_EQ(fastText(v), standardText(v)) << v;
+}
+
 // Margins as the classifier gives them: any sign, from 1e-12 to 1e10, and round numbers.
 TEST(NumberText, ShortestMatchesToCharsOnMarginLikeValues) {
     std::mt19937_64 rng(7);
@@ -90,6 +100,67 @@ TEST(NumberText, ShortestMatchesToCharsOnMarginLikeValues) {
         const double p = std::pow(10.0, k);
         EXPECT_EQ(fastText(p), standardText(p)) << k;
         EXPECT_EQ(fastText(std::nextafter(p, 0.0)), standardText(std::nextafter(p, 0.0))) << k;
+    }
+}
+
+std::string standardGeneral(double v, int digits) {
+    char buf[64];
+    return {buf, std::to_chars(buf, buf + sizeof buf, v, std::chars_format::general, digits).ptr};
+}
+
+std::string fastGeneral(double v, int digits) {
+    char buf[kShortestMaxBytes];
+    return {buf, writeSignificant(buf, v, digits)};
+}
+
+TEST(NumberText, SignificantMatchesGeneralFormatOnChosenValues) {
+    const double cases[] = {0.0,
+                            -0.0,
+                            1.0,
+                            -1.0,
+                            0.5,
+                            2.5,
+                            0.0001,
+                            1e-5,
+                            0.000123,
+                            100.0,
+                            1e11,
+                            1e12,
+                            1e13,
+                            123456789012.0,
+                            9.9999999999995,
+                            9.99999999999949,
+                            -5.155284711006857,
+                            -59439740.25061531,
+                            611.657,
+                            22.064e6,
+                            1e-300,
+                            1e300,
+                            1.7976931348623157e308,
+                            4.9e-324,
+                            std::numeric_limits<double>::infinity(),
+                            std::numeric_limits<double>::quiet_NaN()};
+    for (double v : cases)
+        for (int digits = 1; digits <= 17; ++digits)
+            EXPECT_EQ(fastGeneral(v, digits), standardGeneral(v, digits)) << v << " " << digits;
+}
+
+TEST(NumberText, SignificantMatchesGeneralFormatOnRandomValues) {
+    std::mt19937_64 rng(17);
+    std::uniform_real_distribution<double> mantissa(-1000.0, 1000.0), power(-16.0, 16.0);
+    std::uniform_int_distribution<int> digits(1, 17);
+    for (int i = 0; i < 1'000'000; ++i) {
+        const double v = mantissa(rng) * std::pow(10.0, std::floor(power(rng)));
+        ASSERT_EQ(fastGeneral(v, 12), standardGeneral(v, 12)) << v;
+        const int d = digits(rng);
+        ASSERT_EQ(fastGeneral(v, d), standardGeneral(v, d)) << v << " " << d;
+        // Values on a decimal grid sit on or next to rounding ties.
+        const double grid = std::round(v * 1e4) / 1e4 + 5e-5;
+        ASSERT_EQ(fastGeneral(grid, 4), standardGeneral(grid, 4)) << grid;
+    }
+    for (int i = 0; i < 1'000'000; ++i) {
+        const double v = std::bit_cast<double>(rng());
+        ASSERT_EQ(fastGeneral(v, 12), standardGeneral(v, 12)) << v;
     }
 }
 
