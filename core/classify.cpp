@@ -217,8 +217,9 @@ ClassificationView Classifier::view(double T, double P) const {
         fillMargins(c, T, P, {&critical, 1});
         return c;
     }
+    const double lnP = std::log(P);  // once: every boundary lookup below is in ln p
     if (P <= pt_) {
-        const OptValue sub = diagram_->sublimationTemperature(P);
+        const OptValue sub = diagram_->sublimationTemperature(P, lnP);
         if (!sub) return unknown(fmt::format("no sublimation curve at {} Pa", P));
         const Candidate k = fromValue(sub);
         c.phase = T < sub->value ? Phase::Solid : Phase::Vapor;
@@ -230,7 +231,7 @@ ClassificationView Classifier::view(double T, double P) const {
     // vapor or liquid: the melting curve is looked up only when needed.
     const bool meltLooked = !(P < pc_ && T >= meltCeilingBelowPc_);
     OptValue melt;
-    if (meltLooked) melt = diagram_->meltingTemperature(P);
+    if (meltLooked) melt = diagram_->meltingTemperature(P, lnP);
     if (melt && T < melt->value) {
         const Candidate k = fromValue(melt);
         c.phase = Phase::Solid;
@@ -238,14 +239,15 @@ ClassificationView Classifier::view(double T, double P) const {
         fillMargins(c, T, P, {&k, 1});
         return c;
     }
-    if (P < pc_) return belowPc(T, P, melt, meltLooked);
+    if (P < pc_) return belowPc(T, P, lnP, melt, meltLooked);
     return abovePc(T, P, melt);
 }
 
 // pt < p < pc, not solid: vapor (margin to vaporization) or liquid (margins to vaporization
 // and melting).
-ClassificationView Classifier::belowPc(double T, double P, OptValue melt, bool meltLooked) const {
-    const OptValue vap = diagram_->vaporizationTemperature(P);
+ClassificationView Classifier::belowPc(double T, double P, double lnP, OptValue melt,
+                                       bool meltLooked) const {
+    const OptValue vap = diagram_->vaporizationTemperature(P, lnP);
     if (!vap) return unknown(fmt::format("no vaporization curve at {} Pa", P));
     ClassificationView c;
     if (T >= vap->value) {
@@ -254,7 +256,7 @@ ClassificationView Classifier::belowPc(double T, double P, OptValue melt, bool m
         fillMargins(c, T, P, {&k, 1});
         return c;
     }
-    if (!meltLooked) melt = diagram_->meltingTemperature(P);
+    if (!meltLooked) melt = diagram_->meltingTemperature(P, lnP);
     if (!melt)
         return unknown(fmt::format("no melting curve at {} Pa: solid or liquid not known", P));
     const Candidate k[2] = {fromValue(vap), fromValue(melt)};

@@ -99,7 +99,7 @@ private:
     void fillMargins(ClassificationView &c, double T, double P,
                      std::span<const Candidate> candidates) const;
     ClassificationView abovePc(double T, double P, const std::optional<BoundaryValue> &melt) const;
-    ClassificationView belowPc(double T, double P, std::optional<BoundaryValue> melt,
+    ClassificationView belowPc(double T, double P, double lnP, std::optional<BoundaryValue> melt,
                                bool meltLooked) const;
     void findMeltCeiling();
 

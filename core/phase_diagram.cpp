@@ -12,18 +12,6 @@ namespace pw {
 
 namespace {
 
-void requireTemperature(double T) {
-    if (!(std::isfinite(T) && T > 0.0)) {
-        throw DomainError(fmt::format("temperature must be above 0 K and finite, got {:g} K", T));
-    }
-}
-
-void requirePressure(double P) {
-    if (!(std::isfinite(P) && P > 0.0)) {
-        throw DomainError(fmt::format("pressure must be positive and finite, got {:g} Pa", P));
-    }
-}
-
 bool finitePoint(const FixedPoint &p) { return std::isfinite(p.T_K) && std::isfinite(p.P_Pa); }
 
 // The published range if given, else the equation's domain; always inside the domain.
@@ -88,10 +76,6 @@ PhaseDiagram &PhaseDiagram::operator=(PhaseDiagram &&other) noexcept {
 void PhaseDiagram::relink() {
     melting_.clear();
     for (int s : meltingSegs_) melting_.push_back(&boundaryOf(s));
-}
-
-const Boundary &PhaseDiagram::boundaryOf(int seg) const {
-    return substance_.boundaries[segments_[static_cast<std::size_t>(seg)].index];
 }
 
 void PhaseDiagram::buildSegments() {
@@ -175,29 +159,26 @@ const Boundary *PhaseDiagram::sublimation() const {
     return sublimationSeg_ < 0 ? nullptr : &boundaryOf(sublimationSeg_);
 }
 
-std::optional<BoundaryValue> PhaseDiagram::segmentPressure(int seg, double T_K) const {
-    if (seg < 0) return std::nullopt;
-    const BoundarySegment &s = segments_[static_cast<std::size_t>(seg)];
-    if (!s.T.contains(T_K)) return std::nullopt;
-    const Boundary &b = boundaryOf(seg);
-    double p = s.table.pressure(T_K);
-    if (std::isnan(p)) p = b.model->pressure(T_K);  // outside the table: the equation itself
-    return BoundaryValue{&b, p, b.extrapolated(T_K)};
+// A pressure in a gap between two melting segments whose ends do not quite meet: the lower
+// segment's curve, continued over its whole domain (flagged extrapolated).
+void PhaseDiagram::badTemperature(double T) {
+    throw DomainError(fmt::format("temperature must be above 0 K and finite, got {:g} K", T));
 }
 
-std::optional<BoundaryValue> PhaseDiagram::segmentTemperature(int seg, double P_Pa) const {
-    if (seg < 0) return std::nullopt;
+void PhaseDiagram::badPressure(double P) {
+    throw DomainError(fmt::format("pressure must be positive and finite, got {:g} Pa", P));
+}
+
+// The table did not answer (outside its range or a cell that missed its tolerance): the
+// bracketed solver on the segment.
+std::optional<BoundaryValue> PhaseDiagram::solveOnSegment(int seg, double lnP) const {
     const BoundarySegment &s = segments_[static_cast<std::size_t>(seg)];
-    if (!(P_Pa >= s.pLo && P_Pa <= s.pHi)) return std::nullopt;
     const Boundary &b = boundaryOf(seg);
-    auto T = s.table.temperature(std::log(P_Pa));
-    if (!T) T = solveTemperature(*b.model, std::log(P_Pa), s.T.min_K, s.T.max_K);
+    const auto T = solveTemperature(*b.model, lnP, s.T.min_K, s.T.max_K);
     if (!T) return std::nullopt;
     return BoundaryValue{&b, *T, b.extrapolated(*T)};
 }
 
-// A pressure in a gap between two melting segments whose ends do not quite meet: the lower
-// segment's curve, continued over its whole domain (flagged extrapolated).
 std::optional<BoundaryValue> PhaseDiagram::solveOutside(int seg, double P_Pa) const {
     const Boundary &b = boundaryOf(seg);
     const TRange d = b.model->domain();
@@ -219,23 +200,9 @@ std::vector<BoundaryValue> PhaseDiagram::temperaturesAt(double P_Pa) const {
     requirePressure(P_Pa);
     std::vector<BoundaryValue> out;
     for (int i = 0; i < static_cast<int>(segments_.size()); ++i) {
-        if (auto v = segmentTemperature(i, P_Pa)) out.push_back(*v);
+        if (auto v = segmentTemperature(i, P_Pa, std::log(P_Pa))) out.push_back(*v);
     }
     return out;
-}
-
-std::optional<BoundaryValue> PhaseDiagram::meltingTemperature(double P_Pa) const {
-    requirePressure(P_Pa);
-    for (std::size_t k = 0; k < meltingSegs_.size(); ++k) {
-        const BoundarySegment &s = segments_[static_cast<std::size_t>(meltingSegs_[k])];
-        if (P_Pa < s.pLo) {
-            // Below the first segment: no melting; between two segments: the gap.
-            if (k == 0) return std::nullopt;
-            return solveOutside(meltingSegs_[k - 1], P_Pa);
-        }
-        if (P_Pa <= s.pHi) return segmentTemperature(meltingSegs_[k], P_Pa);
-    }
-    return std::nullopt;
 }
 
 double PhaseDiagram::meltingTemperatureCeiling(double P_lo_Pa, double P_hi_Pa) const {
@@ -252,40 +219,12 @@ double PhaseDiagram::meltingTemperatureCeiling(double P_lo_Pa, double P_hi_Pa) c
         // T(p) is monotonic on a segment: its largest value in the range is at an end. The
         // margin covers the inverse's accuracy (1e-9 K).
         for (const double p : {std::max(s.pLo, P_lo_Pa), std::min(s.pHi, P_hi_Pa)}) {
-            const auto T = segmentTemperature(meltingSegs_[k], p);
+            const auto T = segmentTemperature(meltingSegs_[k], p, std::log(p));
             if (!T) return std::numeric_limits<double>::infinity();
             ceiling = std::max(ceiling, T->value + 1e-6);
         }
     }
     return ceiling;
-}
-
-std::optional<BoundaryValue> PhaseDiagram::vaporizationTemperature(double P_Pa) const {
-    requirePressure(P_Pa);
-    return segmentTemperature(vaporizationSeg_, P_Pa);
-}
-
-std::optional<BoundaryValue> PhaseDiagram::sublimationTemperature(double P_Pa) const {
-    requirePressure(P_Pa);
-    return segmentTemperature(sublimationSeg_, P_Pa);
-}
-
-std::optional<BoundaryValue> PhaseDiagram::meltingPressure(double T_K) const {
-    requireTemperature(T_K);
-    for (int seg : meltingSegs_) {
-        if (auto v = segmentPressure(seg, T_K)) return v;
-    }
-    return std::nullopt;
-}
-
-std::optional<BoundaryValue> PhaseDiagram::vaporizationPressure(double T_K) const {
-    requireTemperature(T_K);
-    return segmentPressure(vaporizationSeg_, T_K);
-}
-
-std::optional<BoundaryValue> PhaseDiagram::sublimationPressure(double T_K) const {
-    requireTemperature(T_K);
-    return segmentPressure(sublimationSeg_, T_K);
 }
 
 namespace {

@@ -2,6 +2,7 @@
 // The pressure–temperature phase diagram of one substance, built from its Substance data.
 // Knows which boundary applies where (the triple points split the curves into segments),
 // answers boundary queries, derived quantities, and checks thermodynamic consistency.
+#include <cmath>
 #include <optional>
 #include <string>
 #include <vector>
@@ -48,13 +49,18 @@ public:
     // Every boundary's temperature at P where its segment exists at P.
     std::vector<BoundaryValue> temperaturesAt(double P_Pa) const;
 
-    // Piecewise over the segments; nullopt where no segment covers the argument.
+    // Piecewise over the segments; nullopt where no segment covers the argument. These
+    // queries are inline (core/phase_diagram_queries.h): a table of a million state points
+    // makes several each per point. The forms with lnP take ln(P_Pa) from a caller that has it.
     std::optional<BoundaryValue> meltingTemperature(double P_Pa) const;
+    std::optional<BoundaryValue> meltingTemperature(double P_Pa, double lnP) const;
     // No meltingTemperature(P) for P in [P_lo, P_hi] exceeds this (-inf: none there; +inf: a
     // gap between segments there is bridged by extrapolation, so no bound is known).
     double meltingTemperatureCeiling(double P_lo_Pa, double P_hi_Pa) const;
     std::optional<BoundaryValue> vaporizationTemperature(double P_Pa) const;  // pt <= P <= pc
-    std::optional<BoundaryValue> sublimationTemperature(double P_Pa) const;   // P <= pt
+    std::optional<BoundaryValue> vaporizationTemperature(double P_Pa, double lnP) const;
+    std::optional<BoundaryValue> sublimationTemperature(double P_Pa) const;  // P <= pt
+    std::optional<BoundaryValue> sublimationTemperature(double P_Pa, double lnP) const;
     std::optional<BoundaryValue> meltingPressure(double T_K) const;
     std::optional<BoundaryValue> vaporizationPressure(double T_K) const;  // Tt <= T <= Tc
     std::optional<BoundaryValue> sublimationPressure(double T_K) const;   // T <= Tt
@@ -82,9 +88,20 @@ public:
 private:
     // Segment queries (core/phase_diagram.cpp). `seg` indexes segments_.
     std::optional<BoundaryValue> segmentPressure(int seg, double T_K) const;
-    std::optional<BoundaryValue> segmentTemperature(int seg, double P_Pa) const;
+    std::optional<BoundaryValue> segmentTemperature(int seg, double P_Pa, double lnP) const;
+    std::optional<BoundaryValue> solveOnSegment(int seg, double lnP) const;
+    static void requireTemperature(double T) {
+        if (!(std::isfinite(T) && T > 0.0)) badTemperature(T);
+    }
+    static void requirePressure(double P) {
+        if (!(std::isfinite(P) && P > 0.0)) badPressure(P);
+    }
+    [[noreturn]] static void badTemperature(double T);  // throws DomainError
+    [[noreturn]] static void badPressure(double P);
     std::optional<BoundaryValue> solveOutside(int seg, double P_Pa) const;
-    const Boundary &boundaryOf(int seg) const;
+    const Boundary &boundaryOf(int seg) const {
+        return substance_.boundaries[segments_[static_cast<std::size_t>(seg)].index];
+    }
     void buildSegments();
     void relink();  // melting_ from meltingSegs_
 
@@ -97,3 +114,5 @@ private:
 };
 
 }  // namespace pw
+
+#include "core/phase_diagram_queries.h"  // IWYU pragma: export

@@ -12,7 +12,7 @@ namespace {
 
 // The curve tables: cells per table, refinement levels, coarse nodes.
 constexpr int kCells = 256;
-constexpr int kMaxLevel = 7;
+constexpr int kMaxLevel = 5;
 constexpr int kNodes = 256;
 // The exact inverse stops when a Newton step (or the bracket) is below 1e-15 T (about 4 ulp).
 constexpr double kNewtonStopRel = 1e-15;
