@@ -24,6 +24,10 @@
 namespace pw::cli {
 namespace {
 
+// Significant digits of dT_K and dP_Pa in CSV output. The curve tables behind them are good
+// to 1e-11 K and 1e-13 in p (core/solver.h): digits past the twelfth would be noise.
+constexpr int kDefaultDigits = 12;
+
 struct ClassifyArgs {
     std::string substance;
     std::optional<double> T, P;
@@ -33,6 +37,7 @@ struct ClassifyArgs {
     StateFileOptions file;
     ClassifyOptions tolerance;
     int threads = 0;  // 0: one per core
+    int digits = kDefaultDigits;
 };
 
 nlohmann::json number(double v) { return std::isfinite(v) ? nlohmann::json(v) : nlohmann::json(); }
@@ -80,15 +85,43 @@ void classifyPoint(const ClassifyArgs &a, Io &io) {
     if (const std::string f = flagsText(c); !f.empty()) io.out << "  flags: " << f << '\n';
 }
 
-void writeRow(csv::Writer &w, std::string_view record, const ClassificationView &c) {
+// Whether every text a classification of this diagram can hold (phase names, solid forms,
+// boundary labels, flags) goes into a field unquoted: then rows skip the per-field scan.
+bool plainTexts(const PhaseDiagram &diagram, const csv::Writer &w) {
+    std::vector<std::string> texts{"solid",          "liquid",
+                                   "vapor",          "gas",
+                                   "supercritical",  "unknown",
+                                   "true",           "false",
+                                   "critical point", "on_boundary within_uncertainty extrapolated"};
+    for (const Boundary &b : diagram.substance().boundaries) {
+        texts.push_back(b.label());
+        texts.push_back(b.solidForm);
+    }
+    return std::none_of(texts.begin(), texts.end(),
+                        [&](const std::string &t) { return w.needsQuotes(t); });
+}
+
+void writeRow(csv::Writer &w, std::string_view record, const ClassificationView &c, bool plain) {
     w.raw(record);
+    const std::string_view flags = flagsText(c);
+    const std::string_view onBoundary = c.onBoundary ? "true" : "false";
+    if (plain && c.phase != Phase::Unknown) {
+        w.fieldVerbatim(toString(c.phase));
+        w.fieldVerbatim(c.solidForm);
+        w.fieldVerbatim(c.nearestLabel);
+        w.field(c.dT_K);
+        w.field(c.dP_Pa);
+        w.fieldVerbatim(onBoundary);
+        w.fieldVerbatim(flags);
+        w.endRow();
+        return;
+    }
     w.field(toString(c.phase));
     w.field(c.solidForm);
     w.field(c.nearestLabel);
     w.field(c.dT_K);
     w.field(c.dP_Pa);
-    w.field(c.onBoundary ? std::string_view("true") : std::string_view("false"));
-    const std::string_view flags = flagsText(c);
+    w.field(onBoundary);
     if (c.phase == Phase::Unknown)
         w.field(flags.empty() ? c.reason : fmt::format("{} {}", flags, c.reason));
     else
@@ -104,8 +137,11 @@ struct RowBlock {
     std::vector<double> T, P;       // kelvin, pascal
     csv::Writer text;               // the output rows
 
-    RowBlock(char delimiter, bool decimalComma) : text(delimiter) {
+    bool plain = false;  // writeRow's `plain`
+
+    RowBlock(char delimiter, bool decimalComma, int digits) : text(delimiter) {
         text.setDecimalComma(decimalComma);
+        text.setSignificantDigits(digits);
     }
     std::size_t size() const { return ends.size(); }
     void add(std::string_view record, const RowState &s) {
@@ -135,7 +171,8 @@ void classifyBlock(const Classifier &classifier, RowBlock &b) {
     std::size_t start = 0;
     const std::string_view all(b.records);
     for (std::size_t i = 0; i < b.size(); ++i) {
-        writeRow(b.text, all.substr(start, b.ends[i] - start), classifier.view(b.T[i], b.P[i]));
+        writeRow(b.text, all.substr(start, b.ends[i] - start), classifier.view(b.T[i], b.P[i]),
+                 b.plain);
         start = b.ends[i];
     }
 }
@@ -163,7 +200,12 @@ void classifyFile(const ClassifyArgs &a, Io &io) {
     }
     const unsigned workers = workerThreads(a.threads);
     OrderedPipeline<RowBlock> pipeline(
-        workers, 2 * workers + 2, [&] { return RowBlock(reader.delimiter(), a.file.decimalComma); },
+        workers, 2 * workers + 2,
+        [&] {
+            RowBlock b(reader.delimiter(), a.file.decimalComma, a.digits);
+            b.plain = plainTexts(*diagram, b.text);
+            return b;
+        },
         [&](RowBlock &b) { classifyBlock(classifier, b); },
         [&](RowBlock &b) {
             out.stream().write(b.text.text().data(),
@@ -225,6 +267,12 @@ void addClassifyCommand(CLI::App &app, Io &io) {
                     "all in one thread); the output is the same for any number")
         ->capture_default_str()
         ->check(CLI::Range(0, 256))
+        ->needs(in);
+    cmd->add_option("--digits", a->digits,
+                    "CSV input: significant digits of dT_K and dP_Pa (1 to 17; 17 reads back "
+                    "to the exact double)")
+        ->capture_default_str()
+        ->check(CLI::Range(1, 17))
         ->needs(in);
     cmd->callback([a, &io] {
         if (a->file.input.empty())

@@ -71,6 +71,69 @@ TEST_F(CliClassify, FileWithBracketUnitsFromStdin) {
     EXPECT_NE(r.out.find("40;100;supercritical;;critical point;9.02"), std::string::npos);
 }
 
+// The margin fields of the one data row of a classify CSV output.
+std::pair<std::string, std::string> marginTexts(const std::string &csv) {
+    std::istringstream lines(csv);
+    std::string header, row;
+    std::getline(lines, header);
+    std::getline(lines, row);
+    std::vector<std::string> cells;
+    std::istringstream fields(row);
+    for (std::string cell; std::getline(fields, cell, ',');) cells.push_back(cell);
+    return {cells.at(5), cells.at(6)};  // T, P, phase, solid_form, nearest_boundary, dT, dP
+}
+
+TEST_F(CliClassify, MarginsWithTwelveDigitsByDefaultAndExactWithSeventeen) {
+    // 250.123 K at 20.5 Pa: vapor below the ice sublimation curve (about 77 Pa there), with
+    // margins that are long decimals. 12 significant digits by default; --digits 17 reads
+    // back to the very double the single-point classification gives.
+    const std::string input = "T,P\n250.123,20.5\n";
+    const Result byDefault = runCli({"classify", "--substance", "water", "--input", "-"}, input);
+    ASSERT_EQ(byDefault.code, kExitOk) << byDefault.err;
+    const auto [dT12, dP12] = marginTexts(byDefault.out);
+    const auto significant = [](std::string s) {
+        s.erase(std::remove_if(s.begin(), s.end(), [](char c) { return c < '0' || c > '9'; }),
+                s.end());
+        return s.substr(s.find_first_not_of('0')).size();
+    };
+    EXPECT_LE(significant(dT12), 12u) << dT12;
+    EXPECT_LE(significant(dP12), 12u) << dP12;
+    const Result exact =
+        runCli({"classify", "--substance", "water", "--input", "-", "--digits", "17"}, input);
+    ASSERT_EQ(exact.code, kExitOk) << exact.err;
+    const auto [dT17, dP17] = marginTexts(exact.out);
+    EXPECT_NEAR(std::stod(dT17), std::stod(dT12), 1e-9);
+    EXPECT_NEAR(std::stod(dP17), std::stod(dP12), 1e-9);
+    const Result json =
+        runCli({"classify", "--substance", "water", "--T", "250.123", "--P", "20.5", "--json"});
+    const auto j = nlohmann::json::parse(json.out);
+    EXPECT_EQ(std::stod(dT17), j["dT_K"].get<double>());  // bit for bit
+    EXPECT_EQ(std::stod(dP17), j["dP_Pa"].get<double>());
+    EXPECT_EQ(
+        runCli({"classify", "--substance", "water", "--input", "-", "--digits", "18"}, input).code,
+        kExitUsage);
+    EXPECT_EQ(
+        runCli({"classify", "--substance", "water", "--input", "-", "--digits", "0"}, input).code,
+        kExitUsage);
+}
+
+TEST_F(CliClassify, LabelsWithTheSeparatorAreQuoted) {
+    // A user's substance whose solid form carries the separator: its rows take the checked
+    // path of the writer (RFC 4180 quoting), not the unquoted one of the bundled labels.
+    std::ifstream bundled(std::string(PW_SOURCE_DIR) + "/resources/substances/water.json");
+    std::string json((std::istreambuf_iterator<char>(bundled)), {});
+    for (std::size_t at = json.find("\"ice Ih\""); at != std::string::npos;
+         at = json.find("\"ice Ih\"", at))
+        json.replace(at, 8, "\"ice I,h\"");
+    const std::string substance = file("water-comma.json", json);
+    const Result r =
+        runCli({"classify", "--substance", substance, "--input", "-"}, "T,P\n250,10\n250,1000\n");
+    ASSERT_EQ(r.code, kExitOk) << r.err;
+    EXPECT_NE(r.out.find("250,10,vapor,,\"sublimation (ice I,h)\","), std::string::npos) << r.out;
+    EXPECT_NE(r.out.find("250,1000,solid,\"ice I,h\",\"melting (ice I,h)\","), std::string::npos)
+        << r.out;
+}
+
 TEST_F(CliClassify, BadRowFailsAndLeavesNoFile) {
     const std::string in = file("in.csv", "T,P\n300,1e5\n300,abc\n");
     const std::string out = (dir_ / "out.csv").string();
