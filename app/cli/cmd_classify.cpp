@@ -16,6 +16,7 @@
 #include "app/cli/state_input.h"
 #include "app/cli/substance_arg.h"
 #include "core/classify.h"
+#include "core/csv/state_rows.h"
 #include "core/csv/writer.h"
 #include "core/errors.h"
 #include "core/ordered_pipeline.h"
@@ -129,37 +130,25 @@ void writeRow(csv::Writer &w, std::string_view record, const ClassificationView 
     w.endRow();
 }
 
-// Rows travel in blocks: the reading thread parses them, worker threads classify and format
-// them, the reading thread writes the finished blocks in input order (core/ordered_pipeline.h).
+// Rows travel in blocks of input text: the reading thread cuts the file into blocks of whole
+// records, worker threads read, classify and format them (csv::StateRowScanner), the reading
+// thread writes the finished blocks and reports their bad rows in input order
+// (core/ordered_pipeline.h).
 struct RowBlock {
-    std::string records;            // the input records, back to back
-    std::vector<std::size_t> ends;  // where each record ends in `records`
-    std::vector<double> T, P;       // kelvin, pascal
-    csv::Writer text;               // the output rows
-
-    bool plain = false;  // writeRow's `plain`
+    csv::TextBlock input;
+    csv::Writer text;              // the output rows
+    std::vector<csv::BadRow> bad;  // lines counted from the block's first line
+    long lines = 0;                // line ends in the block
+    long rows = 0;                 // good rows written
+    bool plain = false;            // writeRow's `plain`
 
     RowBlock(char delimiter, bool decimalComma, int digits) : text(delimiter) {
         text.setDecimalComma(decimalComma);
         text.setSignificantDigits(digits);
     }
-    std::size_t size() const { return ends.size(); }
-    void add(std::string_view record, const RowState &s) {
-        records.append(record);
-        ends.push_back(records.size());
-        T.push_back(s.T_K);
-        P.push_back(s.P_Pa);
-    }
-    void clear() {
-        records.clear();
-        ends.clear();
-        T.clear();
-        P.clear();
-        text.clear();
-    }
 };
 
-constexpr std::size_t kBlockRows = 4096;
+constexpr std::size_t kBlockBytes = std::size_t{64} << 10;
 
 unsigned workerThreads(int threads) {
     const unsigned n = threads > 0 ? static_cast<unsigned>(threads)
@@ -167,14 +156,32 @@ unsigned workerThreads(int threads) {
     return n == 1 ? 0 : n;
 }
 
-void classifyBlock(const Classifier &classifier, RowBlock &b) {
-    std::size_t start = 0;
-    const std::string_view all(b.records);
-    for (std::size_t i = 0; i < b.size(); ++i) {
-        writeRow(b.text, all.substr(start, b.ends[i] - start), classifier.view(b.T[i], b.P[i]),
-                 b.plain);
-        start = b.ends[i];
-    }
+// Without --skip-bad the first bad row ends the block's work: it fails the command.
+void classifyBlock(const Classifier &classifier, const csv::StateRowScanner &scanner, bool skipBad,
+                   RowBlock &b) {
+    b.text.clear();
+    b.bad.clear();
+    b.rows = 0;
+    b.lines = scanner.scan(
+        b.input,
+        [&](std::string_view record, double T, double P) {
+            writeRow(b.text, record, classifier.view(T, P), b.plain);
+            ++b.rows;
+        },
+        [&](csv::BadRow &&row) {
+            b.bad.push_back(std::move(row));
+            return skipBad;
+        });
+}
+
+void writeHeader(AtomicOutput &out, const csv::Reader &reader) {
+    csv::Writer w(out.stream(), reader.delimiter());
+    w.raw(reader.headerRecord());
+    for (const char *h :
+         {"phase", "solid_form", "nearest_boundary", "dT_K", "dP_Pa", "on_boundary", "flags"})
+        w.field(h);
+    w.endRow();
+    w.flush();
 }
 
 void classifyFile(const ClassifyArgs &a, Io &io) {
@@ -187,17 +194,11 @@ void classifyFile(const ClassifyArgs &a, Io &io) {
     columns.tUnit = a.tUnit;
     columns.pUnit = a.pUnit;
     const csv::StateColumns cols = csv::resolveStateColumns(reader.header(), columns, name);
+    const csv::StateRowScanner scanner(reader, cols, a.file.decimalComma);
 
     AtomicOutput out(a.output, io.out);
-    {
-        csv::Writer w(out.stream(), reader.delimiter());
-        w.raw(reader.headerRecord());
-        for (const char *h :
-             {"phase", "solid_form", "nearest_boundary", "dT_K", "dP_Pa", "on_boundary", "flags"})
-            w.field(h);
-        w.endRow();
-        w.flush();
-    }
+    writeHeader(out, reader);
+    long bad = 0, rows = 0, line = reader.nextLine();
     const unsigned workers = workerThreads(a.threads);
     OrderedPipeline<RowBlock> pipeline(
         workers, 2 * workers + 2,
@@ -206,39 +207,22 @@ void classifyFile(const ClassifyArgs &a, Io &io) {
             b.plain = plainTexts(*diagram, b.text);
             return b;
         },
-        [&](RowBlock &b) { classifyBlock(classifier, b); },
+        [&](RowBlock &b) { classifyBlock(classifier, scanner, a.file.skipBad, b); },
         [&](RowBlock &b) {
+            for (const csv::BadRow &r : b.bad) {
+                if (!a.file.skipBad) throw r.error(name, line);
+                ++bad;
+                io.err << "skipped: " << r.error(name, line).what() << '\n';
+            }
             out.stream().write(b.text.text().data(),
                                static_cast<std::streamsize>(b.text.text().size()));
-            b.clear();
+            rows += b.rows;
+            line += b.lines;
         });
-    long bad = 0, rows = 0;
-    RowBlock *block = &pipeline.next();
-    for (;;) {
-        try {
-            if (!reader.next()) break;
-            ++rows;
-            block->add(reader.record(), readState(reader, cols, a.file.decimalComma));
-        } catch (const InputError &e) {
-            if (!a.file.skipBad) {
-                // Rows before this one come first: a failure among them is the one reported.
-                pipeline.submit();
-                pipeline.finish();
-                throw;
-            }
-            ++bad;
-            io.err << "skipped: " << e.what() << '\n';
-            continue;
-        }
-        if (block->size() == kBlockRows) {
-            pipeline.submit();
-            block = &pipeline.next();
-        }
-    }
+    while (reader.nextBlock(pipeline.next().input, kBlockBytes)) pipeline.submit();
+    pipeline.finish();
     if (rows == 0 && bad == 0)
         throw InputError(name, 2, "", "the file has a header but no data rows");
-    pipeline.submit();
-    pipeline.finish();
     out.commit();
     if (bad > 0) io.err << badRowSummary(bad, name) << '\n';
 }

@@ -9,6 +9,7 @@
 
 #include "app/cli/substance_arg.h"
 #include "core/csv/number_text.h"
+#include "core/csv/state_rows.h"
 #include "core/errors.h"
 #include "core/units.h"
 
@@ -124,21 +125,9 @@ RowState readState(const csv::Reader &reader, const csv::StateColumns &columns) 
 RowState readState(const csv::Reader &reader, const csv::StateColumns &columns, bool decimalComma) {
     const double t = cellNumber(reader, columns.t, decimalComma);
     const double p = cellNumber(reader, columns.p, decimalComma);
-    const double T = toKelvin(t, columns.tUnit), P = toPascal(p, columns.pUnit);
-    if (!std::isfinite(T) || !std::isfinite(P))  // 1e308 kPa overflows in the conversion
-        throw InputError(reader.fileName(), reader.row(),
-                         reader.header()[std::isfinite(T) ? columns.p : columns.t],
-                         "the value is out of range after conversion to K and Pa");
-    if (!(T > 0.0))
-        throw InputError(reader.fileName(), reader.row(), reader.header()[columns.t],
-                         fmt::format("{} {} is not a physical temperature (at or below 0 K)", t,
-                                     symbol(columns.tUnit)));
-    if (!(P > 0.0))
-        throw InputError(reader.fileName(), reader.row(), reader.header()[columns.p],
-                         fmt::format("{} {} is not a physical absolute pressure (must be above "
-                                     "0; gauge readings need the barometric pressure added)",
-                                     p, symbol(columns.pUnit)));
-    return {T, P};
+    const csv::StateValues v =
+        csv::checkedState(t, p, columns, reader.header(), reader.fileName(), reader.row());
+    return {v.T_K, v.P_Pa};
 }
 
 double readTime(const csv::Reader &reader, const csv::StateColumns &columns) {

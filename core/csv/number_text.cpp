@@ -224,50 +224,118 @@ char *writeSignificant(char *out, double value, int digits) {
         .ptr;
 }
 
-bool parseSimpleDecimal(const char *p, const char *last, double &out) {
-    const bool negative = p != last && *p == '-';
+namespace {
+
+// Little-endian loads: the first byte of the text is the lowest of the word.
+constexpr bool kSwar = std::endian::native == std::endian::little;
+
+std::uint64_t load8(const char *p) {
+    std::uint64_t w;
+    std::memcpy(&w, p, 8);
+    return w;
+}
+
+// How many of the 8 bytes of w, from the first, are decimal digits: a byte is a digit when
+// its high nibble is 3 and stays 3 after adding 6. (A carry out of a byte >= 0xFA only
+// touches the bytes after it, past the end of the run.)
+int digitRun(std::uint64_t w) {
+    constexpr std::uint64_t kHigh = 0xF0F0F0F0F0F0F0F0ull, kThrees = 0x3030303030303030ull;
+    const std::uint64_t t =
+        ((w & kHigh) ^ kThrees) | (((w + 0x0606060606060606ull) & kHigh) ^ kThrees);
+    // The top bit of each byte of t that is not zero (no carries between bytes).
+    const std::uint64_t nonzero =
+        (t | ((t & 0x7F7F7F7F7F7F7F7Full) + 0x7F7F7F7F7F7F7F7Full)) & 0x8080808080808080ull;
+    return nonzero == 0 ? 8 : std::countr_zero(nonzero) / 8;
+}
+
+// The value of the first n (1 to 8) digits of w: shifted to the top of the word with zero
+// bytes (leading zeros) below them, then combined pairwise in three multiplications (the
+// eight-digit conversion of simdjson, Langdale & Lemire 2019).
+std::uint64_t runValue(std::uint64_t w, int n) {
+    w = (w << (8 * (8 - n))) & 0x0F0F0F0F0F0F0F0Full;
+    w = (w * 2561) >> 8;
+    w = ((w & 0x00FF00FF00FF00FFull) * 6553601) >> 16;
+    return ((w & 0x0000FFFF0000FFFFull) * 42949672960001ull) >> 32;
+}
+
+// Appends the digit run at p to m (digits counts every digit read, leading zeros too);
+// false when m could pass 19 digits. Moves p past the run.
+bool readDigits(const char *&p, std::uint64_t &m, int &digits) {
+    for (;;) {
+        const std::uint64_t w = load8(p);
+        const int n = digitRun(w);
+        if (n == 0) return true;
+        if (digits + n > kMaxDigits) return false;
+        m = m * kPow10Int[n] + runValue(w, n);
+        digits += n;
+        p += n;
+        if (n < 8) return true;
+    }
+}
+
+// The byte-at-a-time form of readDigits, for big-endian machines.
+bool readDigitsBytewise(const char *&p, std::uint64_t &m, int &digits) {
+    for (; isDigit(*p); ++p) {
+        if (++digits > kMaxDigits) return false;
+        m = m * 10 + static_cast<std::uint64_t>(*p - '0');
+    }
+    return true;
+}
+
+bool digitsAt(const char *&p, std::uint64_t &m, int &digits) {
+    if constexpr (kSwar) return readDigits(p, m, digits);
+    return readDigitsBytewise(p, m, digits);
+}
+
+}  // namespace
+
+const char *parseDecimalPadded(const char *p, double &out) {
+    const bool negative = *p == '-';
     if (negative) ++p;
     const char *start = p;
-    while (p != last && *p == '0') ++p;  // leading zeros are not significant digits
     std::uint64_t m = 0;
-    const char *digitsStart = p;
-    for (; p != last && isDigit(*p); ++p) m = m * 10 + static_cast<std::uint64_t>(*p - '0');
-    int digits = static_cast<int>(p - digitsStart), scale = 0;
-    if (p != last && *p == '.') {
+    int digits = 0, scale = 0;
+    if (!digitsAt(p, m, digits)) return nullptr;
+    bool any = p != start;
+    if (*p == '.') {
         const char *fraction = ++p;
-        if (m == 0) {  // 0.000ddd: the zeros after the point only scale
-            while (p != last && *p == '0') ++p;
-        }
-        const char *significant = p;
-        for (; p != last && isDigit(*p); ++p) m = m * 10 + static_cast<std::uint64_t>(*p - '0');
-        digits += static_cast<int>(p - significant);
+        if (!digitsAt(p, m, digits)) return nullptr;
         scale = -static_cast<int>(p - fraction);
+        any = any || p != fraction;
     }
-    if (digits > kMaxDigits) return false;  // m may have wrapped: not the fast path
-    const bool any = p != start && !(p - start == 1 && *start == '.');
-    if (!any) return false;
-    if (p != last && (*p == 'e' || *p == 'E')) {
+    if (!any) return nullptr;
+    if (*p == 'e' || *p == 'E') {
         ++p;
-        const bool down = p != last && *p == '-';
-        if (p != last && (*p == '-' || *p == '+')) ++p;
-        if (p == last) return false;
+        const bool down = *p == '-';
+        if (*p == '-' || *p == '+') ++p;
+        if (!isDigit(*p)) return nullptr;
         int x = 0;
-        for (; p != last && isDigit(*p); ++p) {
-            if (x > 1000) return false;  // far outside the fast path anyway
+        for (; isDigit(*p); ++p) {
+            if (x > 1000) return nullptr;  // far outside the fast path anyway
             x = x * 10 + (*p - '0');
         }
         scale += down ? -x : x;
     }
-    if (p != last) return false;
     if (m == 0) {
         out = negative ? -0.0 : 0.0;
-        return true;
+        return p;
     }
-    if (m > kExactInt || scale < -kMaxPow10 || scale > kMaxPow10) return false;
+    if (m > kExactInt || scale < -kMaxPow10 || scale > kMaxPow10) return nullptr;
     const double v = static_cast<double>(m);
     const double r = scale < 0 ? v / kPow10[-scale] : v * kPow10[scale];
     out = negative ? -r : r;
-    return true;
+    return p;
+}
+
+bool parseSimpleDecimal(const char *first, const char *last, double &out) {
+    // A copy with the padding parseDecimalPadded reads, ended by a byte that no number has.
+    constexpr std::size_t kLongest = 40;  // longer text has too many digits for the fast path
+    const auto n = static_cast<std::size_t>(last - first);
+    if (n == 0 || n > kLongest) return false;
+    char text[kLongest + kParsePadding];
+    std::memcpy(text, first, n);
+    std::memset(text + n, 0, kParsePadding);
+    return parseDecimalPadded(text, out) == text + n;
 }
 
 }  // namespace pw::csv

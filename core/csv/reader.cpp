@@ -29,6 +29,65 @@ std::string_view delimiterName(char d) {
 
 }  // namespace
 
+bool splitRecord(std::string_view record, char delimiter, std::vector<std::string_view> &fields,
+                 std::string &scratch) {
+    fields.clear();
+    const char d = delimiter;
+    std::string_view rest = record;
+    if (rest.find('"') == std::string_view::npos) {
+        for (;;) {
+            const void *hit = std::memchr(rest.data(), d, rest.size());
+            if (!hit) break;
+            const auto n = static_cast<std::size_t>(static_cast<const char *>(hit) - rest.data());
+            fields.push_back(rest.substr(0, n));
+            rest.remove_prefix(n + 1);
+        }
+        fields.push_back(rest);
+        return true;
+    }
+    scratch.clear();
+    scratch.reserve(record.size());  // no reallocation below: views stay valid
+    std::size_t i = 0;
+    const std::size_t n = record.size();
+    for (;;) {
+        const std::size_t start = scratch.size();
+        const bool quoted = i < n && record[i] == '"';
+        bool inside = quoted;
+        if (quoted) ++i;
+        for (; i < n; ++i) {
+            const char c = record[i];
+            if (inside && c == '"') {
+                if (i + 1 < n && record[i + 1] == '"') {
+                    scratch += '"';
+                    ++i;
+                } else {
+                    inside = false;
+                }
+                continue;
+            }
+            if (!inside && c == d) break;
+            scratch += c;
+        }
+        if (inside) return false;
+        fields.emplace_back(scratch.data() + start, scratch.size() - start);
+        if (i >= n) break;
+        ++i;  // past the separator
+    }
+    return true;
+}
+
+std::string fieldCountMessage(std::size_t fields, std::size_t headerFields, char delimiter) {
+    return fmt::format("the row has {} fields but the header has {} ({}-separated)", fields,
+                       headerFields, delimiterName(delimiter));
+}
+
+void TextBlock::assign(const char *text, std::size_t size) {
+    if (data_.size() < size + kPadding) data_.resize(size + kPadding);
+    std::memcpy(data_.data(), text, size);
+    std::memset(data_.data() + size, 0, kPadding);
+    size_ = size;
+}
+
 std::string shownCell(std::string_view cell) {
     constexpr std::size_t kMax = 40;
     if (cell.size() <= kMax) return std::string(cell);
@@ -177,48 +236,8 @@ bool Reader::readRecord() {
 }
 
 void Reader::split() {
-    fields_.clear();
-    const char d = delimiter_;
-    std::string_view rest = record_;
-    if (rest.find('"') == std::string_view::npos) {
-        for (;;) {
-            const void *hit = std::memchr(rest.data(), d, rest.size());
-            if (!hit) break;
-            const auto n = static_cast<std::size_t>(static_cast<const char *>(hit) - rest.data());
-            fields_.push_back(rest.substr(0, n));
-            rest.remove_prefix(n + 1);
-        }
-        fields_.push_back(rest);
-        return;
-    }
-    scratch_.clear();
-    scratch_.reserve(record_.size());  // no reallocation below: views stay valid
-    std::size_t i = 0;
-    const std::size_t n = record_.size();
-    for (;;) {
-        const std::size_t start = scratch_.size();
-        const bool quoted = i < n && record_[i] == '"';
-        bool inside = quoted;
-        if (quoted) ++i;
-        for (; i < n; ++i) {
-            const char c = record_[i];
-            if (inside && c == '"') {
-                if (i + 1 < n && record_[i + 1] == '"') {
-                    scratch_ += '"';
-                    ++i;
-                } else {
-                    inside = false;
-                }
-                continue;
-            }
-            if (!inside && c == d) break;
-            scratch_ += c;
-        }
-        if (inside) throw InputError(fileName_, row_, "", "a quoted field is not closed");
-        fields_.emplace_back(scratch_.data() + start, scratch_.size() - start);
-        if (i >= n) break;
-        ++i;  // past the separator
-    }
+    if (!splitRecord(record_, delimiter_, fields_, scratch_))
+        throw InputError(fileName_, row_, "", "a quoted field is not closed");
 }
 
 bool Reader::next() {
@@ -226,9 +245,45 @@ bool Reader::next() {
     split();
     if (fields_.size() != header_.size())
         throw InputError(fileName_, row_, "",
-                         fmt::format("the row has {} fields but the header has {} ({}-separated)",
-                                     fields_.size(), header_.size(), delimiterName(delimiter_)));
+                         fieldCountMessage(fields_.size(), header_.size(), delimiter_));
     return true;
+}
+
+bool Reader::nextBlock(TextBlock &block, std::size_t bytes) {
+    bytes = std::max<std::size_t>(bytes, 1);
+    for (;;) {
+        if (end_ - begin_ < bytes && !eof_) {
+            fill();
+            continue;
+        }
+        if (begin_ == end_) return false;
+        const char *data = buffer_.data() + begin_;
+        const std::size_t size = std::min(end_ - begin_, bytes);
+        // The last line end outside quotes within the first `size` bytes.
+        std::size_t cut = 0;
+        if (std::memchr(data, '"', size) == nullptr) {
+            const void *last = ::memrchr(data, '\n', size);
+            if (last) cut = static_cast<std::size_t>(static_cast<const char *>(last) - data) + 1;
+        } else {
+            bool inside = false;
+            for (std::size_t i = 0; i < size; ++i) {
+                if (data[i] == '"') inside = !inside;
+                if (data[i] == '\n' && !inside) cut = i + 1;
+            }
+        }
+        if (cut == 0) {
+            // No whole record within `bytes`: a longer one, or the last without a line end.
+            if (eof_ && size == end_ - begin_) {
+                cut = size;
+            } else {
+                bytes *= 2;
+                continue;
+            }
+        }
+        block.assign(data, cut);
+        begin_ += cut;
+        return true;
+    }
 }
 
 double Reader::number(std::size_t column) const {

@@ -27,6 +27,29 @@ struct ReaderOptions {
     std::size_t bufferBytes = std::size_t{1} << 20;
 };
 
+// Whole records of a delimited file, handed out a block at a time (Reader::nextBlock), for
+// readers that split and parse the records themselves. The text is followed by kPadding zero
+// bytes that fast parsers may read past its end (csv::parseDecimalPadded).
+class TextBlock {
+public:
+    static constexpr std::size_t kPadding = 16;
+    std::string_view text() const { return {data_.data(), size_}; }
+    void assign(const char *text, std::size_t size);
+
+private:
+    std::vector<char> data_;
+    std::size_t size_ = 0;
+};
+
+// Splits one record into fields at `delimiter`, honouring quotes (a quoted field's text goes
+// to `scratch` without its quotes, a doubled quote as one); the views point into `record` or
+// `scratch`. False when a quoted field is not closed.
+bool splitRecord(std::string_view record, char delimiter, std::vector<std::string_view> &fields,
+                 std::string &scratch);
+
+// The message for a record with the wrong number of fields.
+std::string fieldCountMessage(std::size_t fields, std::size_t headerFields, char delimiter);
+
 // A cell as quoted in a message: a long cell (a runaway line) is cut to its first 40 bytes.
 std::string shownCell(std::string_view cell);
 
@@ -56,6 +79,14 @@ public:
 
     // The field as a number; throws pw::InputError naming file, row and the column's header.
     double number(std::size_t column) const;
+
+    // Instead of next(): the rest of the input as blocks of whole records, at most `bytes` each
+    // (more for a record longer than that), each ending with its line end (the last block of
+    // a file without a final line end: without); false at the end. Empty lines stay in the
+    // blocks. Lines are not counted: the first block starts on nextLine().
+    bool nextBlock(TextBlock &block, std::size_t bytes);
+    // The line (1-based) the unread text starts on.
+    long nextLine() const { return nextLine_; }
 
 private:
     bool readRecord();

@@ -1,14 +1,19 @@
-// Fuzz target: the delimited-text reader (core/csv/reader.h) and the state-column resolver
-// (core/csv/columns.h). Byte 0 picks the separator, byte 1 the decimal comma and the time
-// column. The buffer starts small so long records make it grow. Every pw::Error is accepted;
-// anything else (a crash, a sanitizer report, another exception) is a finding.
+// Fuzz target: the delimited-text reader (core/csv/reader.h), the state-column resolver
+// (core/csv/columns.h) and the block scanner of state rows (core/csv/state_rows.h), which
+// must read every file exactly as the reader does (the same records, values and messages).
+// Byte 0 picks the separator and the scanner's block size, byte 1 the decimal comma and the
+// time column. The buffer starts small so long records make it grow. Every pw::Error is
+// accepted; anything else (a crash, a sanitizer report, another exception, the scanner and
+// the reader disagreeing) is a finding.
 #include <cstdint>
+#include <cstdlib>
 #include <sstream>
 #include <string>
 
 #include "core/csv/columns.h"
 #include "core/csv/reader.h"
 #include "core/errors.h"
+#include "tests/core/csv/state_rows_outcomes.h"
 #include "tests/fuzz/fuzz_input.h"
 
 namespace {
@@ -43,6 +48,23 @@ void readAll(const pw::fuzz::Input &input) {
     }
 }
 
+// The scanner against the reader, on blocks of 1 to 64 bytes.
+void compareScanner(const pw::fuzz::Input &input) {
+    pw::csv::ReaderOptions options;
+    constexpr char kSeparators[] = {'\0', ',', ';', '\t'};
+    options.delimiter = kSeparators[input.option(0) % 4];
+    options.decimalComma = (input.option(1) & 1) != 0;
+    const std::string text(input.text);
+    std::vector<std::string> expected;
+    try {
+        expected = pw::csv::testing::outcomesByReader(text, options);
+    } catch (const pw::Error &) {
+        return;  // the header is refused: there are no rows to compare
+    }
+    const std::size_t blockBytes = 1 + (input.option(0) >> 2) % 64;
+    if (pw::csv::testing::outcomesByScanner(text, options, blockBytes) != expected) std::abort();
+}
+
 }  // namespace
 
 extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t *data, std::size_t size) {
@@ -51,5 +73,6 @@ extern "C" int LLVMFuzzerTestOneInput(const std::uint8_t *data, std::size_t size
         readAll(input);
     } catch (const pw::Error &) {
     }
+    compareScanner(input);
     return 0;
 }

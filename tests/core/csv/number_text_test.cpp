@@ -9,6 +9,7 @@
 #include <cmath>
 #include <cstdint>
 #include <cstdio>
+#include <cstring>
 #include <limits>
 #include <random>
 #include <string>
@@ -214,6 +215,65 @@ TEST(NumberText, LeavesEverythingElseToTheStandardParser) {
                           "1e-23",
                           "1.5e400"})
         EXPECT_FALSE(fastValue(s, v)) << s;
+}
+
+// parseDecimalPadded on `number` followed by `next` and zero padding: where it says the
+// number ends, and its value.
+const char *paddedEnd(const std::string &number, char next, std::string &text, double &v) {
+    text = number;
+    text += next;
+    text.append(kParsePadding, '\0');
+    return parseDecimalPadded(text.data(), v);
+}
+
+TEST(NumberText, PaddedParseEndsWhereTheNumberEnds) {
+    // Every byte that cannot continue a number ends it, bytes above 0x7F included (the
+    // eight-byte digit test must not carry from them into the digits before).
+    for (const char *number : {"267.182122", "1.08286e+07", "-45", "12345678", "123456789", "7."}) {
+        for (int c = 0; c < 256; ++c) {
+            const char next = static_cast<char>(c);
+            if ((next >= '0' && next <= '9') || next == '.' || next == 'e' || next == 'E') continue;
+            std::string text;
+            double v = 0.0;
+            const char *end = paddedEnd(number, next, text, v);
+            ASSERT_EQ(end, text.data() + std::strlen(number)) << number << " then byte " << c;
+            ASSERT_EQ(std::bit_cast<std::uint64_t>(v),
+                      std::bit_cast<std::uint64_t>(standardValue(number)))
+                << number;
+        }
+    }
+}
+
+TEST(NumberText, PaddedParseReadsRunsOfEveryLength) {
+    // Runs of 1 to 20 digits before and after the point: 8 and 16 are where the eight-byte
+    // steps meet; past 19 digits, or past 2^53, the fast path stands aside.
+    std::mt19937_64 rng(5);
+    for (int before = 0; before <= 20; ++before) {
+        for (int after = 0; after <= 20; ++after) {
+            for (int trial = 0; trial < 20; ++trial) {
+                std::string number;
+                for (int i = 0; i < before; ++i) number += static_cast<char>('0' + rng() % 10);
+                if (after > 0) number += '.';
+                for (int i = 0; i < after; ++i) number += static_cast<char>('0' + rng() % 10);
+                if (before + after == 0) continue;
+                std::string text;
+                double v = 0.0;
+                const char *end = paddedEnd(number, ',', text, v);
+                if (before + after > 19) {
+                    EXPECT_EQ(end, nullptr) << number;
+                    continue;
+                }
+                if (end == nullptr) {  // only a mantissa above 2^53 may leave the fast path
+                    EXPECT_GE(before + after, 16) << number;
+                    continue;
+                }
+                ASSERT_EQ(end, text.data() + number.size()) << number;
+                ASSERT_EQ(std::bit_cast<std::uint64_t>(v),
+                          std::bit_cast<std::uint64_t>(standardValue(number)))
+                    << number;
+            }
+        }
+    }
 }
 
 TEST(NumberText, FastPathAgreesWithFromCharsOnRandomText) {
