@@ -226,91 +226,47 @@ char *writeSignificant(char *out, double value, int digits) {
 
 namespace {
 
-// Little-endian loads: the first byte of the text is the lowest of the word.
-constexpr bool kSwar = std::endian::native == std::endian::little;
+// The text ends at `last` (Bounded) or at the first byte that cannot continue a number
+// (Unbounded: the caller guarantees one).
+struct Bounded {
+    const char *last;
+    char at(const char *p) const { return p != last ? *p : '\0'; }
+};
+struct Unbounded {
+    static char at(const char *p) { return *p; }
+};
 
-std::uint64_t load8(const char *p) {
-    std::uint64_t w;
-    std::memcpy(&w, p, 8);
-    return w;
-}
-
-// How many of the 8 bytes of w, from the first, are decimal digits: a byte is a digit when
-// its high nibble is 3 and stays 3 after adding 6. (A carry out of a byte >= 0xFA only
-// touches the bytes after it, past the end of the run.)
-int digitRun(std::uint64_t w) {
-    constexpr std::uint64_t kHigh = 0xF0F0F0F0F0F0F0F0ull, kThrees = 0x3030303030303030ull;
-    const std::uint64_t t =
-        ((w & kHigh) ^ kThrees) | (((w + 0x0606060606060606ull) & kHigh) ^ kThrees);
-    // The top bit of each byte of t that is not zero (no carries between bytes).
-    const std::uint64_t nonzero =
-        (t | ((t & 0x7F7F7F7F7F7F7F7Full) + 0x7F7F7F7F7F7F7F7Full)) & 0x8080808080808080ull;
-    return nonzero == 0 ? 8 : std::countr_zero(nonzero) / 8;
-}
-
-// The value of the first n (1 to 8) digits of w: shifted to the top of the word with zero
-// bytes (leading zeros) below them, then combined pairwise in three multiplications (the
-// eight-digit conversion of simdjson, Langdale & Lemire 2019).
-std::uint64_t runValue(std::uint64_t w, int n) {
-    w = (w << (8 * (8 - n))) & 0x0F0F0F0F0F0F0F0Full;
-    w = (w * 2561) >> 8;
-    w = ((w & 0x00FF00FF00FF00FFull) * 6553601) >> 16;
-    return ((w & 0x0000FFFF0000FFFFull) * 42949672960001ull) >> 32;
-}
-
-// Appends the digit run at p to m (digits counts every digit read, leading zeros too);
-// false when m could pass 19 digits. Moves p past the run.
-bool readDigits(const char *&p, std::uint64_t &m, int &digits) {
-    for (;;) {
-        const std::uint64_t w = load8(p);
-        const int n = digitRun(w);
-        if (n == 0) return true;
-        if (digits + n > kMaxDigits) return false;
-        m = m * kPow10Int[n] + runValue(w, n);
-        digits += n;
-        p += n;
-        if (n < 8) return true;
-    }
-}
-
-// The byte-at-a-time form of readDigits, for big-endian machines.
-bool readDigitsBytewise(const char *&p, std::uint64_t &m, int &digits) {
-    for (; isDigit(*p); ++p) {
-        if (++digits > kMaxDigits) return false;
-        m = m * 10 + static_cast<std::uint64_t>(*p - '0');
-    }
-    return true;
-}
-
-bool digitsAt(const char *&p, std::uint64_t &m, int &digits) {
-    if constexpr (kSwar) return readDigits(p, m, digits);
-    return readDigitsBytewise(p, m, digits);
-}
-
-}  // namespace
-
-const char *parseDecimalPadded(const char *p, double &out) {
-    const bool negative = *p == '-';
+// The plain decimal at p: the end of its text and its value, or nullptr when the text there
+// is no such number or needs the slow path.
+template <class End>
+const char *parseDecimal(const char *p, End end, double &out) {
+    const bool negative = end.at(p) == '-';
     if (negative) ++p;
     const char *start = p;
+    while (end.at(p) == '0') ++p;  // leading zeros are not significant digits
     std::uint64_t m = 0;
-    int digits = 0, scale = 0;
-    if (!digitsAt(p, m, digits)) return nullptr;
-    bool any = p != start;
-    if (*p == '.') {
+    const char *digitsStart = p;
+    for (; isDigit(end.at(p)); ++p) m = m * 10 + static_cast<std::uint64_t>(*p - '0');
+    int digits = static_cast<int>(p - digitsStart), scale = 0;
+    if (end.at(p) == '.') {
         const char *fraction = ++p;
-        if (!digitsAt(p, m, digits)) return nullptr;
+        if (m == 0) {  // 0.000ddd: the zeros after the point only scale
+            while (end.at(p) == '0') ++p;
+        }
+        const char *significant = p;
+        for (; isDigit(end.at(p)); ++p) m = m * 10 + static_cast<std::uint64_t>(*p - '0');
+        digits += static_cast<int>(p - significant);
         scale = -static_cast<int>(p - fraction);
-        any = any || p != fraction;
     }
-    if (!any) return nullptr;
-    if (*p == 'e' || *p == 'E') {
+    if (digits > kMaxDigits) return nullptr;  // m may have wrapped: not the fast path
+    if (p == start || (p - start == 1 && *start == '.')) return nullptr;  // no digit
+    if (const char e = end.at(p); e == 'e' || e == 'E') {
         ++p;
-        const bool down = *p == '-';
-        if (*p == '-' || *p == '+') ++p;
-        if (!isDigit(*p)) return nullptr;
+        const bool down = end.at(p) == '-';
+        if (end.at(p) == '-' || end.at(p) == '+') ++p;
+        if (!isDigit(end.at(p))) return nullptr;
         int x = 0;
-        for (; isDigit(*p); ++p) {
+        for (; isDigit(end.at(p)); ++p) {
             if (x > 1000) return nullptr;  // far outside the fast path anyway
             x = x * 10 + (*p - '0');
         }
@@ -327,15 +283,14 @@ const char *parseDecimalPadded(const char *p, double &out) {
     return p;
 }
 
+}  // namespace
+
 bool parseSimpleDecimal(const char *first, const char *last, double &out) {
-    // A copy with the padding parseDecimalPadded reads, ended by a byte that no number has.
-    constexpr std::size_t kLongest = 40;  // longer text has too many digits for the fast path
-    const auto n = static_cast<std::size_t>(last - first);
-    if (n == 0 || n > kLongest) return false;
-    char text[kLongest + kParsePadding];
-    std::memcpy(text, first, n);
-    std::memset(text + n, 0, kParsePadding);
-    return parseDecimalPadded(text, out) == text + n;
+    return parseDecimal(first, Bounded{last}, out) == last;
+}
+
+const char *parseDecimalAt(const char *first, double &out) {
+    return parseDecimal(first, Unbounded{}, out);
 }
 
 }  // namespace pw::csv

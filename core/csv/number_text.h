@@ -34,14 +34,11 @@ char *writeSignificant(char *out, double value, int digits);
 // exponent), in full; false when the text has another form or needs the slow path.
 bool parseSimpleDecimal(const char *first, const char *last, double &out);
 
-// Bytes after the end of a number's text that parseDecimalPadded may read.
-inline constexpr std::size_t kParsePadding = 8;
-
 // The decimal number (the forms parseSimpleDecimal reads) at the start of the text at
-// `first`, its digits read eight at a time; returns the end of the number's text (the caller
-// checks what follows), or nullptr when no such number starts there or the fast path does not
-// apply. At least kParsePadding bytes after the number's text must be readable: text from a
-// csv::TextBlock, or a copy with that padding.
-const char *parseDecimalPadded(const char *first, double &out);
+// `first`, up to the first byte that cannot continue it; returns the end of the number's text
+// (the caller checks what follows), or nullptr when no such number starts there or the fast
+// path does not apply. The text must hold such a byte before its buffer ends: a
+// csv::TextBlock's padding is one.
+const char *parseDecimalAt(const char *first, double &out);
 
 }  // namespace pw::csv

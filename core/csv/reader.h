@@ -29,7 +29,8 @@ struct ReaderOptions {
 
 // Whole records of a delimited file, handed out a block at a time (Reader::nextBlock), for
 // readers that split and parse the records themselves. The text is followed by kPadding zero
-// bytes that fast parsers may read past its end (csv::parseDecimalPadded).
+// bytes: a parser that reads up to the first byte that cannot continue a number
+// (csv::parseDecimalAt) stops there at the latest.
 class TextBlock {
 public:
     static constexpr std::size_t kPadding = 16;

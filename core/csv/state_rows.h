@@ -2,7 +2,7 @@
 // The temperature and pressure of every record of a state file, a block at a time
 // (csv::Reader::nextBlock), for classifying tables of millions of rows on several threads.
 //
-// A block without quotes whose records hold plain decimals (csv::parseDecimalPadded) in the
+// A block without quotes whose records hold plain decimals (csv::parseDecimalAt) in the
 // T and P columns takes a fast path: no field list, each number read where it stands, its
 // end checked against the separator. Every other record goes the full way (split, the checks
 // of csv::parseNumber, the field count), so values, accepted forms and messages are exactly
@@ -85,7 +85,7 @@ inline const char *StateRowScanner::fastRecord(const char *p, const char *end, d
         const char *q = p;
         if (field == columns_.t || field == columns_.p) {
             double v = 0.0;
-            q = parseDecimalPadded(p, v);
+            q = parseDecimalAt(p, v);
             if (q == nullptr) return nullptr;
             (field == columns_.t ? t : pr) = v;
         } else {

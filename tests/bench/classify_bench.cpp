@@ -161,6 +161,22 @@ void BM_ParseSimpleDecimal(benchmark::State &state) {
 }
 BENCHMARK(BM_ParseSimpleDecimal);
 
+// The parser of the state-row scanner: the numbers as they stand in a block, followed by a
+// separator.
+void BM_ParseDecimalAt(benchmark::State &state) {
+    auto text = logLikeText();
+    for (std::string &s : text) s += ',';
+    std::size_t i = 0;
+    for (auto _ : state) {
+        const std::string &s = text[i++ & 4095];
+        double v = 0.0;
+        benchmark::DoNotOptimize(pw::csv::parseDecimalAt(s.data(), v));
+        benchmark::DoNotOptimize(v);
+    }
+    state.SetItemsProcessed(state.iterations());
+}
+BENCHMARK(BM_ParseDecimalAt);
+
 std::string csvText(std::size_t rows) {
     std::string s = "T [K],P [Pa]\n";
     for (const Point &p : waterPoints(rows))
