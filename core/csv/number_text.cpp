@@ -26,7 +26,7 @@ constexpr char kPairs[] =
 // Two digits of v (v < 100) at out.
 void putPair(char *out, std::uint32_t v) { std::memcpy(out, kPairs + 2 * v, 2); }
 
-std::uint64_t eightDigits(std::uint32_t v) {
+[[gnu::always_inline]] inline std::uint64_t eightDigits(std::uint32_t v) {
     const std::uint64_t q = (std::uint64_t{v} * 109951163) >> 40;          // v / 10^4
     std::uint64_t x = q | ((v - q * 10000) << 32);                         // lanes of 32 bits
     const std::uint64_t q2 = ((x * 10486) >> 20) & 0x0000007F0000007Full;  // w / 100
@@ -69,7 +69,7 @@ int digitCount(std::uint64_t m) {
 
 // The digits of m (0 < m < 10^17) as 17 digits with leading zeros: the same work for every
 // number, so no branch depends on its length. The significant digits end at buf + 17.
-void digitsOf(char *buf, std::uint64_t m) {
+[[gnu::always_inline]] inline void digitsOf(char *buf, std::uint64_t m) {
     const std::uint64_t top = m / 10000000000000000ull;  // < 10
     const std::uint64_t rest = m % 10000000000000000ull;
     buf[0] = static_cast<char>('0' + top);
@@ -79,16 +79,50 @@ void digitsOf(char *buf, std::uint64_t m) {
     std::memcpy(buf + 9, &low, 8);
 }
 
-// The writers below copy fixed-size blocks (kCopy bytes) and then move the end back: the
-// digit buffer and the output have room for the overshoot.
-constexpr std::size_t kCopy = 20;
+// Writing from registers: the digits stay in two words (the first eight digits in `high`,
+// the next eight in `low`, first digit in the lowest byte) and go out in 8-byte stores only.
+// Copying them through a buffer at another offset than they were stored at would make the
+// processor wait for the stores to complete (a failed store-to-load forward).
+void store8(char *out, std::uint64_t w) { std::memcpy(out, &w, 8); }
 
-// "d.ddde+XX": one digit, the rest after a point, the exponent with a sign and 2 or 3 digits.
-char *scientific(char *out, const char *digits, int n, int exponent) {
-    out[0] = digits[0];
-    out[1] = '.';
-    std::memcpy(out + 2, digits + 1, kCopy);
-    out += n > 1 ? n + 1 : 1;
+// The bytes below byte k of a word (k = 0 to 8).
+constexpr std::uint64_t lowBytes(int k) { return k >= 8 ? ~0ull : (1ull << (8 * k)) - 1; }
+
+// w with '.' put in at byte k (0 to 7) and its bytes from k on moved up one (the top one
+// falls out).
+constexpr std::uint64_t withPoint(std::uint64_t w, int k) {
+    return (w & lowBytes(k)) | (std::uint64_t{'.'} << (8 * k)) | ((w << 8) & ~lowBytes(k + 1));
+}
+
+constexpr std::uint64_t kZeroDigits = 0x3030303030303030ull;  // "00000000"
+
+// 16 digits whose first n are significant (the rest '0') written with `point` digits before
+// the decimal point, -3 <= point <= 16 (%g's fixed notation).
+char *fixedFromWords(char *out, std::uint64_t high, std::uint64_t low, int n, int point) {
+    if (point >= n) {  // an integer: the digits, then zeros
+        store8(out, high);
+        store8(out + 8, low);
+        store8(out + 16, kZeroDigits);
+        return out + point;
+    }
+    if (point <= 0) {  // 0.000ddd
+        std::memcpy(out, "0.000000", 8);
+        store8(out + 2 - point, high);
+        store8(out + 10 - point, low);
+        return out + 2 - point + n;
+    }
+    // The point in the first word or in the second: both made, one chosen without a branch.
+    const bool first = point < 8;
+    const std::uint64_t a = withPoint(high, point & 7), b = (high >> 56) | (low << 8);
+    const std::uint64_t c = withPoint(low, point & 7);
+    store8(out, first ? a : high);
+    store8(out + 8, first ? b : c);
+    store8(out + 16, low >> 56);
+    return out + n + 1;
+}
+
+// The exponent part of scientific notation at out: 'e', a sign, 2 or 3 digits.
+char *exponentPart(char *out, int exponent) {
     out[0] = 'e';
     out[1] = exponent < 0 ? '-' : '+';
     const int a = exponent < 0 ? -exponent : exponent;
@@ -101,10 +135,37 @@ char *scientific(char *out, const char *digits, int n, int exponent) {
     return out + 4;
 }
 
+// m (0 < m < 10^digits, digits <= 16) rounded to `digits` significant digits, in %g's form:
+// fixed for -4 <= X < digits, else scientific; X is the exponent of its first digit.
+char *significantText(char *out, std::uint64_t m, int digits, int X) {
+    const std::uint64_t m16 = m * kPow10Int[16 - digits];  // the first digit at the front
+    const std::uint64_t high = eightDigits(static_cast<std::uint32_t>(m16 / 100000000));
+    const std::uint64_t low = eightDigits(static_cast<std::uint32_t>(m16 % 100000000));
+    // %g drops trailing zeros: the last digit is the top byte of `low`.
+    const int zeros = low != kZeroDigits ? std::countl_zero(low ^ kZeroDigits) / 8
+                                         : 8 + std::countl_zero(high ^ kZeroDigits) / 8;
+    const int n = 16 - zeros;
+    if (X >= -4 && X < digits) return fixedFromWords(out, high, low, n, X + 1);
+    fixedFromWords(out, high, low, n, 1);  // d.ddd
+    return exponentPart(out + (n > 1 ? n + 1 : 1), X);
+}
+
+// The writers below copy fixed-size blocks (kCopy bytes) and then move the end back: the
+// digit buffer and the output have room for the overshoot.
+constexpr std::size_t kCopy = 20;
+
+// "d.ddde+XX": one digit, the rest after a point, the exponent with a sign and 2 or 3 digits.
+char *scientific(char *out, const char *digits, int n, int exponent) {
+    out[0] = digits[0];
+    out[1] = '.';
+    std::memcpy(out + 2, digits + 1, kCopy);
+    return exponentPart(out + (n > 1 ? n + 1 : 1), exponent);
+}
+
 // digits × 10^(point - n) written without an exponent: at most 16 zeros after the digits
 // (shortest text: 5, beyond that scientific is shorter; n significant digits: n - 1) and at
 // most 6 after "0." (shortest: 4; general format: 3).
-char *fixed(char *out, const char *digits, int n, int point) {
+[[gnu::always_inline]] inline char *fixed(char *out, const char *digits, int n, int point) {
     if (point >= n) {  // an integer: the digits, then zeros
         std::memcpy(out, digits, kCopy);
         std::memset(out + n, '0', 16);
@@ -181,7 +242,8 @@ char *writeShortest(char *out, double value) {
 char *writeSignificant(char *out, double value, int digits) {
     digits = std::clamp(digits, 1, kMaxSignificant);
     const double a = std::abs(value);
-    if (digits <= kFastSignificant && a >= kSmallestNormal && a <= kLargestFast) {
+    if (std::endian::native == std::endian::little && digits <= kFastSignificant &&
+        a >= kSmallestNormal && a <= kLargestFast) {
         // X, the exponent of the leading digit, from the binary exponent (it is X0 or X0 + 1),
         // then s = a 10^(digits - 1 - X) in one correctly rounded operation with an exact
         // power of ten: its error, below 2^-53 s, is far less than kHalfwayMargin.
@@ -189,11 +251,12 @@ char *writeSignificant(char *out, double value, int digits) {
         int X = (e2 * 1233) >> 12;  // floor(e2 log10 2), up to 1233/4096 ~ log10 2
         int k = digits - 1 - X;
         if (k > -kMaxPow10 && k <= kMaxPow10) {
-            double s = scaled(a, k);
-            if (s >= kPow10[digits]) {
-                ++X;
-                s = scaled(a, --k);
-            }
+            // Both scalings, then a choice without a branch (X0 or X0 + 1 is a coin toss for
+            // values of every size: a branch on it would often be mispredicted).
+            const double s0 = scaled(a, k), s1 = scaled(a, k - 1);
+            const bool up = s0 >= kPow10[digits];
+            X += up ? 1 : 0;
+            const double s = up ? s1 : s0;
             // s is positive and below 2^53: truncation is floor, and s - whole is exact.
             const double whole = static_cast<double>(static_cast<std::uint64_t>(s));
             const double frac = s - whole;
@@ -204,17 +267,9 @@ char *writeSignificant(char *out, double value, int digits) {
                     m = kPow10Int[digits - 1];
                     ++X;
                 }
-                int n = digits;
-                while (m % 10 == 0) {  // %g drops trailing zeros
-                    m /= 10;
-                    --n;
-                }
-                if (std::signbit(value)) *out++ = '-';
-                char buf[kDigitsEnd + kCopy];
-                digitsOf(buf, m);
-                const char *text = buf + kDigitsEnd - n;
-                if (X >= -4 && X < digits) return fixed(out, text, n, X + 1);
-                return scientific(out, text, n, X);
+                *out = '-';
+                out += std::signbit(value) ? 1 : 0;
+                return significantText(out, m, digits, X);
             }
         }
     }
