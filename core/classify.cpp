@@ -109,7 +109,7 @@ Classifier::Classifier(const PhaseDiagram &diagram, ClassifyOptions options)
         vaporSolidForm_ = formOf(diagram.melting().front());
     else
         vaporSolidForm_ = "solid";
-    for (const Boundary &b : diagram.substance().boundaries) labels_.emplace_back(&b, b.label());
+    for (const Boundary &b : diagram.substance().boundaries) labels_.push_back(b.label());
 }
 
 // The diagram's own bound on its melting temperatures between pt and pc (its segments'
@@ -120,9 +120,7 @@ void Classifier::findMeltCeiling() {
 }
 
 std::string_view Classifier::labelOf(const Boundary *b) const {
-    for (const auto &[boundary, label] : labels_)
-        if (boundary == b) return label;
-    return {};  // not reached: every boundary of the diagram has its label
+    return labels_[static_cast<std::size_t>(b - diagram_->substance().boundaries.data())];
 }
 
 std::string_view Classifier::solidFormAt(double T, double P, const Boundary *melt) const {

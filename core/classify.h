@@ -112,7 +112,7 @@ private:
     // are at least this warm need no melting lookup to rule out the solid (+inf: unknown).
     double meltCeilingBelowPc_ = std::numeric_limits<double>::infinity();
     std::string vaporSolidForm_;  // the solid that borders the vapor ("ice Ih", "solid")
-    std::vector<std::pair<const Boundary *, std::string>> labels_;  // Boundary::label() once
+    std::vector<std::string> labels_;  // Boundary::label() once, by index in the substance
 };
 
 // Space-separated flags for tables: "on_boundary", "within_uncertainty", "extrapolated".

@@ -8,7 +8,7 @@
 namespace pw::cli {
 namespace {
 
-void addCommands(CLI::App &app, Io &io) {
+void addCommands(CLI::App &app, Io &io, CommandAdder plot) {
     // One line per command; each lives in its own cmd_*.cpp.
     addListCommand(app, io);
     addInfoCommand(app, io);
@@ -18,11 +18,10 @@ void addCommands(CLI::App &app, Io &io) {
     addPathCommand(app, io);
     addFitCommand(app, io);
     addCompareCommand(app, io);
-#ifdef PW_HAVE_GUI
-    addPlotCommand(app, io);
-#endif
-    (void)app;
-    (void)io;
+    if (plot != nullptr)
+        plot(app, io);
+    else
+        addPlotForwarding(app, io);
 }
 
 // "phasewright-cli frobnicate": name the word and the commands (CLI11 would only say that a
@@ -41,7 +40,7 @@ bool unknownCommand(const CLI::App &app, const std::vector<std::string> &args, I
 
 }  // namespace
 
-int run(const std::vector<std::string> &args, Io io) {
+int run(const std::vector<std::string> &args, Io io, CommandAdder plot) {
     CLI::App app{
         "phasewright-cli: phase of a pure substance at a state point, margins to its phase "
         "boundaries, path crossings, fits and figures.\n"
@@ -50,7 +49,7 @@ int run(const std::vector<std::string> &args, Io io) {
     app.set_version_flag("--version", std::string("phasewright-cli ") + PW_VERSION);
     app.require_subcommand(1);
     app.fallthrough(false);
-    addCommands(app, io);
+    addCommands(app, io, plot);
     if (unknownCommand(app, args, io)) return kExitUsage;
 
     std::vector<std::string> reversed(args.rbegin(), args.rend());
@@ -73,12 +72,12 @@ int run(const std::vector<std::string> &args, Io io) {
     return kExitOk;
 }
 
-int run(int argc, char **argv) {
+int run(int argc, char **argv, CommandAdder plot) {
     std::vector<std::string> args;
     for (int i = 1; i < argc; ++i) args.emplace_back(argv[i]);
     Io io{std::cout, std::cerr, std::cin};
     std::ios::sync_with_stdio(false);
-    return run(args, io);
+    return run(args, io, plot);
 }
 
 }  // namespace pw::cli

@@ -29,8 +29,15 @@ struct Io {
     std::istream &in;
 };
 
-int run(int argc, char **argv);
-int run(const std::vector<std::string> &args, Io io);
+// Adds a subcommand (and its callback) to the command line.
+using CommandAdder = void (*)(CLI::App &app, Io &io);
+
+// `plot` draws with Qt; phasewright-cli itself links no Qt, so that the other commands start
+// without loading it. Its `plot` (no adder given) hands the command line on to the helper
+// program phasewright-plot (app/plot_helper.cpp), which is the same command line with
+// addPlotCommand (library phasewright_cli_plot) and so draws in-process.
+int run(int argc, char **argv, CommandAdder plot = nullptr);
+int run(const std::vector<std::string> &args, Io io, CommandAdder plot = nullptr);
 
 // Each command adds its subcommand and the callback that performs it. The callback reports
 // failures by throwing (pw::Error -> exit 1) after writing nothing to its output file.
@@ -42,6 +49,9 @@ void addBoundaryCommand(CLI::App &app, Io &io);
 void addPathCommand(CLI::App &app, Io &io);
 void addFitCommand(CLI::App &app, Io &io);
 void addCompareCommand(CLI::App &app, Io &io);
-void addPlotCommand(CLI::App &app, Io &io);
+void addPlotCommand(CLI::App &app, Io &io);  // phasewright_cli_plot (with Qt) only
+// `plot` handed on to phasewright-plot: found beside this program or in
+// ../libexec/phasewright/ (app/cli/plot_forward.cpp).
+void addPlotForwarding(CLI::App &app, Io &io);
 
 }  // namespace pw::cli

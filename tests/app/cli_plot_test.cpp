@@ -29,7 +29,7 @@ protected:
         std::ostringstream o, e;
         std::istringstream in;
         args.insert(args.begin(), "plot");
-        const int code = pw::cli::run(args, pw::cli::Io{o, e, in});
+        const int code = pw::cli::run(args, pw::cli::Io{o, e, in}, &pw::cli::addPlotCommand);
         out = o.str();
         err = e.str();
         return code;

@@ -1,6 +1,7 @@
 // phasewright-cli plot: an annotated figure (PNG, SVG or PDF) drawn headlessly by the same
-// code as the desktop (widgets/figure). Built only with the GUI (PW_HAVE_GUI).
-#ifdef PW_HAVE_GUI
+// code as the desktop (widgets/figure). Built only with the GUI, into the library
+// phasewright_cli_plot: the helper program phasewright-plot (app/plot/main.cpp) runs it for
+// phasewright-cli, which links no Qt (app/cli/plot_forward.cpp).
 #include <fmt/format.h>
 
 #include <CLI/CLI.hpp>
@@ -214,4 +215,3 @@ void addPlotCommand(CLI::App &app, Io &io) {
 }
 
 }  // namespace pw::cli
-#endif  // PW_HAVE_GUI
