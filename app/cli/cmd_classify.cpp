@@ -3,6 +3,8 @@
 #include <fmt/format.h>
 
 #include <algorithm>
+#include <array>
+#include <cstdint>
 #include <memory>
 #include <nlohmann/json.hpp>
 #include <optional>
@@ -102,21 +104,73 @@ bool plainTexts(const PhaseDiagram &diagram, const csv::Writer &w) {
                         [&](const std::string &t) { return w.needsQuotes(t); });
 }
 
-void writeRow(csv::Writer &w, std::string_view record, const ClassificationView &c, bool plain) {
+// The fixed texts of a plain row around its margins, composed once for each combination
+// met: before them ",solid,ice Ih,melting (ice Ih),", after them ",false," or
+// ",true,on_boundary" (one append each instead of a field each).
+class RowTexts {
+public:
+    explicit RowTexts(char delimiter) : d_(delimiter) {
+        for (int i = 0; i < 8; ++i) {
+            ClassificationView c;
+            c.onBoundary = (i & 1) != 0;
+            c.withinUncertainty = (i & 2) != 0;
+            c.extrapolated = (i & 4) != 0;
+            after_[static_cast<std::size_t>(i)] =
+                fmt::format("{}{}{}{}", d_, c.onBoundary ? "true" : "false", d_, flagsText(c));
+        }
+    }
+    // Cached by the addresses of the texts (a classifier's texts stay where they are); a slot
+    // taken by another combination is composed again.
+    std::string_view before(const ClassificationView &c) {
+        const auto key = [](std::string_view t) {
+            return reinterpret_cast<std::uintptr_t>(t.data());
+        };
+        const std::size_t slot = ((key(c.solidForm) >> 3) * 31 + (key(c.nearestLabel) >> 3) * 7 +
+                                  static_cast<std::size_t>(c.phase)) %
+                                 kSlots;
+        Slot &s = slots_[slot];
+        if (s.used && s.phase == c.phase && s.form.data() == c.solidForm.data() &&
+            s.form.size() == c.solidForm.size() && s.label.data() == c.nearestLabel.data() &&
+            s.label.size() == c.nearestLabel.size())
+            return s.text;
+        s = {true, c.phase, c.solidForm, c.nearestLabel,
+             fmt::format("{}{}{}{}{}{}{}", d_, toString(c.phase), d_, c.solidForm, d_,
+                         c.nearestLabel, d_)};
+        return s.text;
+    }
+    std::string_view after(const ClassificationView &c) const {
+        return after_[(c.onBoundary ? 1u : 0u) + (c.withinUncertainty ? 2u : 0u) +
+                      (c.extrapolated ? 4u : 0u)];
+    }
+
+private:
+    static constexpr std::size_t kSlots = 64;
+    struct Slot {
+        bool used = false;
+        Phase phase = Phase::Unknown;
+        std::string_view form, label;
+        std::string text;
+    };
+    char d_;
+    std::array<Slot, kSlots> slots_;
+    std::array<std::string, 8> after_;
+};
+
+// `texts`: set when every text a classification can hold goes into a field unquoted
+// (plainTexts()); then rows are composed from them.
+void writeRow(csv::Writer &w, std::string_view record, const ClassificationView &c,
+              RowTexts *texts) {
     w.raw(record);
-    const std::string_view flags = flagsText(c);
-    const std::string_view onBoundary = c.onBoundary ? "true" : "false";
-    if (plain && c.phase != Phase::Unknown) {
-        w.fieldVerbatim(toString(c.phase));
-        w.fieldVerbatim(c.solidForm);
-        w.fieldVerbatim(c.nearestLabel);
-        w.field(c.dT_K);
+    if (texts != nullptr && c.phase != Phase::Unknown) {
+        w.append(texts->before(c));
+        w.appendNumber(c.dT_K);
         w.field(c.dP_Pa);
-        w.fieldVerbatim(onBoundary);
-        w.fieldVerbatim(flags);
+        w.append(texts->after(c));
         w.endRow();
         return;
     }
+    const std::string_view flags = flagsText(c);
+    const std::string_view onBoundary = c.onBoundary ? "true" : "false";
     w.field(toString(c.phase));
     w.field(c.solidForm);
     w.field(c.nearestLabel);
@@ -136,11 +190,11 @@ void writeRow(csv::Writer &w, std::string_view record, const ClassificationView 
 // (core/ordered_pipeline.h).
 struct RowBlock {
     csv::TextBlock input;
-    csv::Writer text;              // the output rows
-    std::vector<csv::BadRow> bad;  // lines counted from the block's first line
-    long lines = 0;                // line ends in the block
-    long rows = 0;                 // good rows written
-    bool plain = false;            // writeRow's `plain`
+    csv::Writer text;                 // the output rows
+    std::vector<csv::BadRow> bad;     // lines counted from the block's first line
+    long lines = 0;                   // line ends in the block
+    long rows = 0;                    // good rows written
+    std::unique_ptr<RowTexts> texts;  // writeRow's `texts`
 
     RowBlock(char delimiter, bool decimalComma, int digits) : text(delimiter) {
         text.setDecimalComma(decimalComma);
@@ -165,7 +219,7 @@ void classifyBlock(const Classifier &classifier, const csv::StateRowScanner &sca
     b.lines = scanner.scan(
         b.input,
         [&](std::string_view record, double T, double P) {
-            writeRow(b.text, record, classifier.view(T, P), b.plain);
+            writeRow(b.text, record, classifier.view(T, P), b.texts.get());
             ++b.rows;
         },
         [&](csv::BadRow &&row) {
@@ -204,7 +258,8 @@ void classifyFile(const ClassifyArgs &a, Io &io) {
         workers, 2 * workers + 2,
         [&] {
             RowBlock b(reader.delimiter(), a.file.decimalComma, a.digits);
-            b.plain = plainTexts(*diagram, b.text);
+            if (plainTexts(*diagram, b.text))
+                b.texts = std::make_unique<RowTexts>(reader.delimiter());
             return b;
         },
         [&](RowBlock &b) { classifyBlock(classifier, scanner, a.file.skipBad, b); },

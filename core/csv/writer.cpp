@@ -52,6 +52,11 @@ void Writer::putQuoted(std::string_view text) {
 
 void Writer::field(double value) {
     separate();
+    appendNumber(value);
+}
+
+void Writer::appendNumber(double value) {
+    rowStart_ = false;
     if (std::isnan(value)) return;
     if (room() < kShortestMaxBytes) grow(kShortestMaxBytes);
     char *start = pos_;

@@ -50,6 +50,14 @@ public:
         separate();
         put(text);
     }
+    // Text that continues the current row as it is, separators included: rows the caller
+    // composes from pieces it has checked once with needsQuotes().
+    void append(std::string_view text) {
+        rowStart_ = false;
+        put(text);
+    }
+    // A number that continues the current row (no separator before it); NaN adds nothing.
+    void appendNumber(double value);
     // Whether field() would quote `text` with this writer's separator.
     bool needsQuotes(std::string_view text) const {
         // One pass over the (short) field: cheaper than a search per special character.
