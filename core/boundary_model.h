@@ -30,10 +30,6 @@ public:
     virtual std::string_view form() const = 0;
     // Temperatures where the equation is defined and monotonic.
     virtual TRange domain() const = 0;
-    // Whether p itself (false) or ln p (true) is the smoother function of T, the one the fast
-    // tables interpolate (core/solver.h): ln p for vapor-pressure forms, p for melting forms
-    // that are sums in p (near the triple point ln p of those bends too sharply).
-    virtual bool smoothInLnPressure() const { return true; }
 
     // Inverse: the temperature on the curve at pressure p, searched within `within`
     // (defaults to domain()). Bracketed and guaranteed to converge (see core/solver.h);

@@ -63,14 +63,10 @@ CurveTable::CurveTable(BoundaryModelPtr model, double T_lo, double T_hi)
     T_hi_ = T_hi;
     lnpMin_ = nodeLnp_.front();
     lnpMax_ = nodeLnp_.back();
-    inLnP_ = model_->smoothInLnPressure();
-    if (inLnP_) {
-        forward_ = PolyTable([this](double T) { return exact(T).lnp; }, T_lo, T_hi,
-                             {kCells, kMaxLevel, kTableLnpAbs, kTableLnpRel});
-    } else {
-        forward_ = PolyTable([this](double T) { return model_->pressure(T); }, T_lo, T_hi,
-                             {kCells, kMaxLevel, 0.0, kTableLnpAbs});
-    }
+    // p itself, not ln p: a query then needs no exp() (p of the vapor-pressure forms, near
+    // exponential in T, takes more pieces at low T than ln p would).
+    forward_ = PolyTable([this](double T) { return model_->pressure(T); }, T_lo, T_hi,
+                         {kCells, kMaxLevel, 0.0, kTablePressureRel});
     inverse_ = PolyTable([this](double lnp) { return exactTemperature(lnp); }, lnpMin_, lnpMax_,
                          {kCells, kMaxLevel, kTableExact_K, 0.0});
 }

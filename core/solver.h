@@ -6,9 +6,8 @@
 //
 // CurveTable: the fast path for repeated queries on one curve segment, both ways: p(T) and
 // T(ln p) as piecewise polynomials (core/poly_table.h) whose error was measured against the
-// equation when built, at the points where the error peaks: p within about 1e-13 relative
-// (kTableLnpAbs, kTableLnpRel: the table holds ln p or p, whichever is the smoother function
-// of T for the form), T within kTableExact_K. The exact inverse behind the table is safeguarded
+// equation when built, at the points where the error peaks: p within kTablePressureRel
+// relative, T within kTableExact_K. The exact inverse behind the table is safeguarded
 // Newton on ln p(T) (the curve is monotonic on the segment); where a table cell missed its
 // tolerance (next to a critical point, where the equations have a fractional power of T_c - T)
 // queries solve the equation itself.
@@ -30,10 +29,8 @@ namespace pw {
 inline constexpr double kSolverRelTol = 1e-13;
 // Error the inverse table allows (K): a hundredth of the 1e-9 K guarantee.
 inline constexpr double kTableExact_K = 1e-11;
-// Error the forward table allows in ln p: 1e-13 plus 1e-15 |ln p| (about 1e-13 relative in p);
-// a table of p itself allows kTableLnpAbs relative.
-inline constexpr double kTableLnpAbs = 1e-13;
-inline constexpr double kTableLnpRel = 1e-15;
+// Relative error the forward table p(T) allows.
+inline constexpr double kTablePressureRel = 1e-13;
 
 // Root of f on [lo, hi]; nullopt when f(lo), f(hi) do not bracket a root (or are NaN).
 template <class F>
@@ -78,9 +75,8 @@ public:
     // p at T (Pa); NaN outside [T_lo, T_hi].
     double pressure(double T) const {
         if (!(T >= T_lo_ && T <= T_hi_)) return std::numeric_limits<double>::quiet_NaN();
-        const double v = forward_(T);
-        if (std::isnan(v)) return model_->pressure(T);
-        return inLnP_ ? std::exp(v) : v;
+        const double p = forward_(T);
+        return std::isnan(p) ? model_->pressure(T) : p;
     }
     // The tables themselves (tests and benchmarks).
     const PolyTable &forward() const { return forward_; }
@@ -101,8 +97,7 @@ private:
     double lnpMin_ = std::numeric_limits<double>::infinity();
     double lnpMax_ = -std::numeric_limits<double>::infinity();
     std::vector<double> nodeT_, nodeLnp_;  // coarse (T, ln p) nodes, by increasing ln p
-    bool inLnP_ = true;                    // forward_ holds ln p (else p)
-    PolyTable forward_;                    // ln p(T) or p(T): BoundaryModel::smoothInLnPressure
+    PolyTable forward_;                    // p(T)
     PolyTable inverse_;                    // T(ln p)
 };
 

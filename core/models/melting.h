@@ -14,7 +14,6 @@ public:
     double pressure(double T) const override;
     double dPdT(double T) const override;
     LnPressure lnPressure(double T) const override;
-    bool smoothInLnPressure() const override { return false; }
 
 private:
     bool integrated_;
@@ -28,7 +27,6 @@ public:
     double pressure(double T) const override;
     double dPdT(double T) const override;
     LnPressure lnPressure(double T) const override;
-    bool smoothInLnPressure() const override { return false; }
 
 private:
     double Tref_, Pref_, a_, c_;
@@ -45,7 +43,6 @@ public:
     double pressure(double T) const override;
     double dPdT(double T) const override;
     LnPressure lnPressure(double T) const override;
-    bool smoothInLnPressure() const override { return kind_ == Kind::IapwsLog; }
 
 private:
     // p/P_ref (or ln(p/P_ref) for IapwsLog) and its T-derivative.
