@@ -42,8 +42,7 @@ void LazyCurveTable::shareFrom(const LazyCurveTable &other) noexcept {
     ready_.store(table_.get(), std::memory_order_release);
 }
 
-const CurveTable &LazyCurveTable::get() const {
-    if (const CurveTable *t = ready_.load(std::memory_order_acquire)) return *t;
+const CurveTable &LazyCurveTable::build() const {
     const std::lock_guard<std::mutex> lock(mutex_);
     if (const CurveTable *t = ready_.load(std::memory_order_relaxed)) return *t;
     std::shared_ptr<const CurveTable> built;

@@ -35,12 +35,16 @@ public:
     std::optional<double> temperature(double lnp) const { return get().temperature(lnp); }
     // p at T from the table; NaN outside it or without a table.
     double pressure(double T) const { return get().pressure(T); }
-    // The table, built now if needed.
-    const CurveTable &get() const;
+    // The table, built now if needed (the built case inline: it is on every query's path).
+    const CurveTable &get() const {
+        if (const CurveTable *t = ready_.load(std::memory_order_acquire)) return *t;
+        return build();
+    }
     bool built() const { return ready_.load(std::memory_order_acquire) != nullptr; }
 
 private:
     void shareFrom(const LazyCurveTable &other) noexcept;
+    const CurveTable &build() const;
 
     BoundaryModelPtr model_;  // null: no table
     double lo_ = 0.0;

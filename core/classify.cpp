@@ -133,7 +133,7 @@ std::string_view Classifier::solidFormAt(double T, double P, const Boundary *mel
 
 // The pressure of `b` at T where its segment exists at T (melting: inside its validity
 // range, or anywhere in its domain when it is the only melting curve).
-std::optional<BoundaryValue> Classifier::pressureOn(const Boundary *b, double T) const {
+Classifier::OnCurve Classifier::pressureOn(const Boundary *b, double T) const {
     OptValue v;
     switch (b->kind) {
         case BoundaryKind::Vaporization:
@@ -143,50 +143,53 @@ std::optional<BoundaryValue> Classifier::pressureOn(const Boundary *b, double T)
             v = diagram_->sublimationPressure(T);
             break;
         case BoundaryKind::Melting:
-            if (b->validity.valid() && b->validity.contains(T))
-                return BoundaryValue{b, b->model->pressure(T), false};
+            if (b->validity.valid() && b->validity.contains(T)) return {b->model->pressure(T)};
             if (segments_.size() == 1) v = diagram_->meltingPressure(T);
             break;
         case BoundaryKind::SolidSolid:
             break;
     }
-    if (v && v->boundary != b) v.reset();
-    return v;
+    if (!v || v->boundary != b) return {};
+    return {v->value, v->extrapolated};
+}
+
+void Classifier::fillMargins(ClassificationView &c, double T, double P, const Candidate &a,
+                             const Candidate &b) const {
+    c.extrapolated = c.extrapolated || a.extrapolated || b.extrapolated;
+    // NaN temperatures never win; on a tie the first does.
+    const bool second = std::isfinite(b.T_K) && !(std::abs(T - a.T_K) <= std::abs(T - b.T_K));
+    fillMargins(c, T, P, second ? b : a);
 }
 
 void Classifier::fillMargins(ClassificationView &c, double T, double P,
-                             std::span<const Candidate> candidates) const {
-    const Candidate *best = nullptr;
-    for (const Candidate &k : candidates) {
-        c.extrapolated = c.extrapolated || k.extrapolated;
-        if (std::isfinite(k.T_K) && (!best || std::abs(T - k.T_K) < std::abs(T - best->T_K)))
-            best = &k;
+                             const Candidate &best) const {
+    c.extrapolated = c.extrapolated || best.extrapolated;
+    if (!std::isfinite(best.T_K)) return;
+    if (best.boundary == nullptr) {
+        criticalMargins(c, T, P);
+        return;
     }
-    if (!best) return;
-    double pOnCurve = kNaN;
-    c.dT_K = T - best->T_K;
-    c.nearest = best->boundary;
-    if (best->boundary == nullptr) {
-        c.nearestLabel = "critical point";
-        pOnCurve = pc_;
-    } else {
-        c.nearestLabel = labelOf(best->boundary);
-        if (const OptValue v = pressureOn(best->boundary, T)) {
-            pOnCurve = v->value;
-            c.extrapolated = c.extrapolated || v->extrapolated;
-        }
-    }
-    c.dP_Pa = P - pOnCurve;
+    c.dT_K = T - best.T_K;
+    c.nearest = best.boundary;
+    c.nearestLabel = labelOf(best.boundary);
+    const OnCurve on = pressureOn(best.boundary, T);
+    c.extrapolated = c.extrapolated || on.extrapolated;
+    c.dP_Pa = P - on.P_Pa;
     const bool hasDP = std::isfinite(c.dP_Pa);
     c.onBoundary = std::abs(c.dT_K) <= options_.onBoundary_K ||
-                   (hasDP && std::abs(c.dP_Pa) <= options_.onBoundaryRel * pOnCurve);
-    if (best->boundary && hasDP && std::isfinite(best->boundary->uncertaintyRel))
-        c.withinUncertainty = std::abs(c.dP_Pa) <= best->boundary->uncertaintyRel * pOnCurve;
+                   (hasDP && std::abs(c.dP_Pa) <= options_.onBoundaryRel * on.P_Pa);
+    if (hasDP && std::isfinite(best.boundary->uncertaintyRel))
+        c.withinUncertainty = std::abs(c.dP_Pa) <= best.boundary->uncertaintyRel * on.P_Pa;
 }
 
-Classifier::Candidate Classifier::fromValue(const std::optional<BoundaryValue> &v) {
-    if (!v) return {};
-    return {v->boundary, v->value, v->extrapolated};
+// The critical point as the reference: dT = T - Tc, dP = p - pc.
+void Classifier::criticalMargins(ClassificationView &c, double T, double P) const {
+    c.dT_K = T - Tc_;
+    c.nearest = nullptr;
+    c.nearestLabel = "critical point";
+    c.dP_Pa = P - pc_;
+    c.onBoundary = std::abs(c.dT_K) <= options_.onBoundary_K ||
+                   std::abs(c.dP_Pa) <= options_.onBoundaryRel * pc_;
 }
 
 Classification Classifier::operator()(double T, double P) const {
@@ -208,75 +211,75 @@ Classification Classifier::operator()(double T, double P) const {
 ClassificationView Classifier::view(double T, double P) const {
     checkState(T, P);
     if (!std::isfinite(pt_)) return unknown("no triple-point data for this substance");
-    const Candidate critical{nullptr, Tc_, false};
     ClassificationView c;
     if (T >= Tc_ && P < pc_) {
         c.phase = Phase::Gas;
-        fillMargins(c, T, P, {&critical, 1});
+        criticalMargins(c, T, P);
         return c;
     }
     const double lnP = std::log(P);  // once: every boundary lookup below is in ln p
     if (P <= pt_) {
-        const OptValue sub = diagram_->sublimationTemperature(P, lnP);
-        if (!sub) return unknown(fmt::format("no sublimation curve at {} Pa", P));
-        const Candidate k = fromValue(sub);
-        c.phase = T < sub->value ? Phase::Solid : Phase::Vapor;
+        const Candidate sub = fromValue(diagram_->sublimationTemperature(P, lnP));
+        if (!sub.boundary) return unknown(fmt::format("no sublimation curve at {} Pa", P));
+        c.phase = T < sub.T_K ? Phase::Solid : Phase::Vapor;
         if (c.phase == Phase::Solid) c.solidForm = vaporSolidForm_;
-        fillMargins(c, T, P, {&k, 1});
+        fillMargins(c, T, P, sub);
         return c;
     }
     // A fluid point at pt < p < pc that is warmer than any melting temperature there is
     // vapor or liquid: the melting curve is looked up only when needed.
     const bool meltLooked = !(P < pc_ && T >= meltCeilingBelowPc_);
-    OptValue melt;
-    if (meltLooked) melt = diagram_->meltingTemperature(P, lnP);
-    if (melt && T < melt->value) {
-        const Candidate k = fromValue(melt);
+    Candidate melt;
+    if (meltLooked) melt = fromValue(diagram_->meltingTemperature(P, lnP));
+    if (melt.boundary && T < melt.T_K) {
         c.phase = Phase::Solid;
-        c.solidForm = solidFormAt(T, P, melt->boundary);
-        fillMargins(c, T, P, {&k, 1});
+        c.solidForm = solidFormAt(T, P, melt.boundary);
+        fillMargins(c, T, P, melt);
         return c;
     }
-    if (P < pc_) return belowPc(T, P, lnP, melt, meltLooked);
-    return abovePc(T, P, melt);
+    if (P < pc_)
+        belowPc(c, T, P, lnP, melt, meltLooked);
+    else
+        abovePc(c, T, P, melt);
+    return c;
 }
 
 // pt < p < pc, not solid: vapor (margin to vaporization) or liquid (margins to vaporization
 // and melting).
-ClassificationView Classifier::belowPc(double T, double P, double lnP, OptValue melt,
-                                       bool meltLooked) const {
-    const OptValue vap = diagram_->vaporizationTemperature(P, lnP);
-    if (!vap) return unknown(fmt::format("no vaporization curve at {} Pa", P));
-    ClassificationView c;
-    if (T >= vap->value) {
-        const Candidate k = fromValue(vap);
-        c.phase = Phase::Vapor;
-        fillMargins(c, T, P, {&k, 1});
-        return c;
+void Classifier::belowPc(ClassificationView &c, double T, double P, double lnP, Candidate melt,
+                         bool meltLooked) const {
+    const Candidate vap = fromValue(diagram_->vaporizationTemperature(P, lnP));
+    if (!vap.boundary) {
+        c = unknown(fmt::format("no vaporization curve at {} Pa", P));
+        return;
     }
-    if (!meltLooked) melt = diagram_->meltingTemperature(P, lnP);
-    if (!melt)
-        return unknown(fmt::format("no melting curve at {} Pa: solid or liquid not known", P));
-    const Candidate k[2] = {fromValue(vap), fromValue(melt)};
+    if (T >= vap.T_K) {
+        c.phase = Phase::Vapor;
+        fillMargins(c, T, P, vap);
+        return;
+    }
+    if (!meltLooked) melt = fromValue(diagram_->meltingTemperature(P, lnP));
+    if (!melt.boundary) {
+        c = unknown(fmt::format("no melting curve at {} Pa: solid or liquid not known", P));
+        return;
+    }
     c.phase = Phase::Liquid;
-    fillMargins(c, T, P, k);
-    return c;
+    fillMargins(c, T, P, vap, melt);
 }
 
 // p >= pc, not solid: compressed liquid (margins to melting or the critical point) or
 // supercritical (margins to the critical point).
-ClassificationView Classifier::abovePc(double T, double P, const OptValue &melt) const {
-    if (!melt)
-        return unknown(fmt::format("no melting curve at {} Pa: a solid cannot be ruled out", P));
-    const Candidate critical{nullptr, Tc_, false};
-    const Candidate k[2] = {fromValue(melt), critical};
-    ClassificationView c;
+void Classifier::abovePc(ClassificationView &c, double T, double P, const Candidate &melt) const {
+    if (!melt.boundary) {
+        c = unknown(fmt::format("no melting curve at {} Pa: a solid cannot be ruled out", P));
+        return;
+    }
     c.phase = T < Tc_ ? Phase::Liquid : Phase::Supercritical;
-    c.extrapolated = melt->extrapolated;
-    fillMargins(c, T, P,
-                c.phase == Phase::Liquid ? std::span<const Candidate>(k)
-                                         : std::span<const Candidate>(&critical, 1));
-    return c;
+    c.extrapolated = melt.extrapolated;
+    if (c.phase == Phase::Liquid)
+        fillMargins(c, T, P, melt, Candidate{nullptr, Tc_, false});
+    else
+        criticalMargins(c, T, P);
 }
 
 Classification classify(const PhaseDiagram &diagram, double T_K, double P_Pa,

@@ -86,21 +86,31 @@ private:
         double tHigh = kNaN;               // higher of them
     };
     // A boundary bounding the point's region and its temperature at the point's pressure
-    // (boundary null: the critical point).
+    // (boundary null: the critical point, or no boundary when T_K is NaN).
     struct Candidate {
         const Boundary *boundary = nullptr;
         double T_K = kNaN;
         bool extrapolated = false;
     };
+    // A boundary's pressure at the point's temperature (NaN: the boundary has none there).
+    struct OnCurve {
+        double P_Pa = kNaN;
+        bool extrapolated = false;
+    };
     std::string_view solidFormAt(double T, double P, const Boundary *melt) const;
     std::string_view labelOf(const Boundary *b) const;
-    std::optional<BoundaryValue> pressureOn(const Boundary *b, double T) const;
-    static Candidate fromValue(const std::optional<BoundaryValue> &v);
-    void fillMargins(ClassificationView &c, double T, double P,
-                     std::span<const Candidate> candidates) const;
-    ClassificationView abovePc(double T, double P, const std::optional<BoundaryValue> &melt) const;
-    ClassificationView belowPc(double T, double P, double lnP, std::optional<BoundaryValue> melt,
-                               bool meltLooked) const;
+    OnCurve pressureOn(const Boundary *b, double T) const;
+    static Candidate fromValue(const std::optional<BoundaryValue> &v) {
+        return v ? Candidate{v->boundary, v->value, v->extrapolated} : Candidate{};
+    }
+    // The margins to `best`, the nearer of the candidates (the first on a tie).
+    void fillMargins(ClassificationView &c, double T, double P, const Candidate &best) const;
+    void fillMargins(ClassificationView &c, double T, double P, const Candidate &a,
+                     const Candidate &b) const;
+    void criticalMargins(ClassificationView &c, double T, double P) const;
+    void abovePc(ClassificationView &c, double T, double P, const Candidate &melt) const;
+    void belowPc(ClassificationView &c, double T, double P, double lnP, Candidate melt,
+                 bool meltLooked) const;
     void findMeltCeiling();
 
     const PhaseDiagram *diagram_;
@@ -111,7 +121,7 @@ private:
     // No melting temperature at pressures in (pt, pc) reaches this: fluid points there that
     // are at least this warm need no melting lookup to rule out the solid (+inf: unknown).
     double meltCeilingBelowPc_ = std::numeric_limits<double>::infinity();
-    std::string vaporSolidForm_;  // the solid that borders the vapor ("ice Ih", "solid")
+    std::string vaporSolidForm_;       // the solid that borders the vapor ("ice Ih", "solid")
     std::vector<std::string> labels_;  // Boundary::label() once, by index in the substance
 };
 
