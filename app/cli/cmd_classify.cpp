@@ -119,24 +119,33 @@ public:
                 fmt::format("{}{}{}{}", d_, c.onBoundary ? "true" : "false", d_, flagsText(c));
         }
     }
-    // Cached by the addresses of the texts (a classifier's texts stay where they are); a slot
-    // taken by another combination is composed again.
+    // Cached by the addresses of the texts (a classifier's texts stay where they are), in an
+    // open-addressing table: a diagram has a few dozen combinations at most.
     std::string_view before(const ClassificationView &c) {
-        const auto key = [](std::string_view t) {
-            return reinterpret_cast<std::uintptr_t>(t.data());
+        const auto address = [](std::string_view t) {
+            return static_cast<std::uint64_t>(reinterpret_cast<std::uintptr_t>(t.data()));
         };
-        const std::size_t slot = ((key(c.solidForm) >> 3) * 31 + (key(c.nearestLabel) >> 3) * 7 +
-                                  static_cast<std::size_t>(c.phase)) %
-                                 kSlots;
-        Slot &s = slots_[slot];
-        if (s.used && s.phase == c.phase && s.form.data() == c.solidForm.data() &&
-            s.form.size() == c.solidForm.size() && s.label.data() == c.nearestLabel.data() &&
-            s.label.size() == c.nearestLabel.size())
-            return s.text;
-        s = {true, c.phase, c.solidForm, c.nearestLabel,
-             fmt::format("{}{}{}{}{}{}{}", d_, toString(c.phase), d_, c.solidForm, d_,
-                         c.nearestLabel, d_)};
-        return s.text;
+        const std::uint64_t h = (address(c.solidForm) * 0x9E3779B97F4A7C15ull) ^
+                                (address(c.nearestLabel) * 0xC2B2AE3D27D4EB4Full) ^
+                                static_cast<std::uint64_t>(c.phase);
+        for (std::size_t i = (h >> 32) % kSlots;; i = (i + 1) % kSlots) {
+            Slot &s = slots_[i];
+            if (!s.used) {
+                if (++used_ > kSlots / 2) {  // not expected: start again rather than fill up
+                    for (Slot &t : slots_) t.used = false;
+                    used_ = 0;
+                    return before(c);
+                }
+                s = {true, c.phase, c.solidForm, c.nearestLabel,
+                     fmt::format("{}{}{}{}{}{}{}", d_, toString(c.phase), d_, c.solidForm, d_,
+                                 c.nearestLabel, d_)};
+                return s.text;
+            }
+            if (s.phase == c.phase && s.form.data() == c.solidForm.data() &&
+                s.form.size() == c.solidForm.size() && s.label.data() == c.nearestLabel.data() &&
+                s.label.size() == c.nearestLabel.size())
+                return s.text;
+        }
     }
     std::string_view after(const ClassificationView &c) const {
         return after_[(c.onBoundary ? 1u : 0u) + (c.withinUncertainty ? 2u : 0u) +
@@ -152,6 +161,7 @@ private:
         std::string text;
     };
     char d_;
+    std::size_t used_ = 0;
     std::array<Slot, kSlots> slots_;
     std::array<std::string, 8> after_;
 };
