@@ -29,7 +29,9 @@ AtomicOutput::AtomicOutput(const std::string &path, std::ostream &standardOutput
                                 std::strerror(errno)));
     ::close(fd);
     tempPath_ = name.data();
-    file_.open(tempPath_, std::ios::binary | std::ios::trunc);
+    // The new, empty file opened without O_TRUNC: on ext4 a truncation to zero makes close()
+    // start writing the whole file back (auto_da_alloc), which the command would wait for.
+    file_.open(tempPath_, std::ios::binary | std::ios::in | std::ios::out);
     if (!file_) {
         std::remove(tempPath_.c_str());
         throw Error(fmt::format("{}: cannot open a temporary file for writing", path));
