@@ -13,6 +13,7 @@
 #include "core/classify.h"
 #include "core/csv/number_text.h"
 #include "core/csv/reader.h"
+#include "core/csv/state_rows.h"
 #include "core/csv/writer.h"
 #include "core/library.h"
 
@@ -197,6 +198,27 @@ void BM_CsvRead(benchmark::State &state) {
     state.SetBytesProcessed(state.iterations() * static_cast<long>(text.size()));
 }
 BENCHMARK(BM_CsvRead)->Unit(benchmark::kMillisecond);
+
+// The same rows as classify --input reads them: blocks of whole records, scanned in place.
+void BM_StateRowScan(benchmark::State &state) {
+    const std::string text = csvText(100000);
+    for (auto _ : state) {
+        std::istringstream in(text);
+        pw::csv::Reader r(in, "bench.csv");
+        const pw::csv::StateColumns c = pw::csv::resolveStateColumns(r.header(), {}, "bench.csv");
+        const pw::csv::StateRowScanner scanner(r, c, false);
+        pw::csv::TextBlock block;
+        double sum = 0.0;
+        while (r.nextBlock(block, std::size_t{64} << 10))
+            scanner.scan(
+                block, [&](std::string_view, double T, double P) { sum += T + P; },
+                [](pw::csv::BadRow &&) { return true; });
+        benchmark::DoNotOptimize(sum);
+    }
+    state.SetItemsProcessed(state.iterations() * 100000);
+    state.SetBytesProcessed(state.iterations() * static_cast<long>(text.size()));
+}
+BENCHMARK(BM_StateRowScan)->Unit(benchmark::kMillisecond);
 
 void BM_CsvWrite(benchmark::State &state) {
     const auto points = waterPoints(100000);
