@@ -173,7 +173,8 @@ void writeRow(csv::Writer &w, std::string_view record, const ClassificationView 
     w.raw(record);
     if (texts != nullptr && c.phase != Phase::Unknown) {
         w.append(texts->before(c));
-        w.appendNumbers(c.dT_K, c.dP_Pa);
+        w.appendNumber(c.dT_K);
+        w.field(c.dP_Pa);
         w.append(texts->after(c));
         w.endRow();
         return;

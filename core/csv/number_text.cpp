@@ -135,6 +135,21 @@ char *exponentPart(char *out, int exponent) {
     return out + 4;
 }
 
+// m (0 < m < 10^digits, digits <= 16) rounded to `digits` significant digits, in %g's form:
+// fixed for -4 <= X < digits, else scientific; X is the exponent of its first digit.
+char *significantText(char *out, std::uint64_t m, int digits, int X) {
+    const std::uint64_t m16 = m * kPow10Int[16 - digits];  // the first digit at the front
+    const std::uint64_t high = eightDigits(static_cast<std::uint32_t>(m16 / 100000000));
+    const std::uint64_t low = eightDigits(static_cast<std::uint32_t>(m16 % 100000000));
+    // %g drops trailing zeros: the last digit is the top byte of `low`.
+    const int zeros = low != kZeroDigits ? std::countl_zero(low ^ kZeroDigits) / 8
+                                         : 8 + std::countl_zero(high ^ kZeroDigits) / 8;
+    const int n = 16 - zeros;
+    if (X >= -4 && X < digits) return fixedFromWords(out, high, low, n, X + 1);
+    fixedFromWords(out, high, low, n, 1);  // d.ddd
+    return exponentPart(out + (n > 1 ? n + 1 : 1), X);
+}
+
 // The writers below copy fixed-size blocks (kCopy bytes) and then move the end back: the
 // digit buffer and the output have room for the overshoot.
 constexpr std::size_t kCopy = 20;
@@ -187,76 +202,6 @@ double scaled(double a, int k) { return k >= 0 ? a * kPow10[k] : a / kPow10[-k];
 
 bool isDigit(char c) { return c >= '0' && c <= '9'; }
 
-// A value rounded to `digits` significant digits, ready to be written: the digits of
-// m 10^(16 - digits) (m the rounded significand, first digit at the front) as two words.
-struct Rounded {
-    bool fast = false;  // false: the standard library writes it (see roundSignificant)
-    bool negative = false;
-    std::uint64_t high = 0, low = 0;
-    int n = 0;  // significant digits, trailing zeros dropped (%g)
-    int X = 0;  // the exponent of the first digit
-};
-
-// The fast path of writeSignificant: up to kFastSignificant digits, normal numbers whose
-// exponent stays in the power table, not next to a rounding tie. Inline and branch-light, so
-// that two calls side by side (writeSignificantPair) overlap in the processor.
-[[gnu::always_inline]] inline Rounded roundSignificant(double value, int digits) {
-    Rounded r;
-    const double a = std::abs(value);
-    if (!(std::endian::native == std::endian::little && digits <= kFastSignificant &&
-          a >= kSmallestNormal && a <= kLargestFast))
-        return r;
-    // X, the exponent of the leading digit, from the binary exponent (it is X0 or X0 + 1),
-    // then s = a 10^(digits - 1 - X) in one correctly rounded operation with an exact power
-    // of ten: its error, below 2^-53 s, is far less than kHalfwayMargin.
-    const int e2 = static_cast<int>((std::bit_cast<std::uint64_t>(a) >> 52) & 0x7ff) - 1023;
-    int X = (e2 * 1233) >> 12;  // floor(e2 log10 2), up to 1233/4096 ~ log10 2
-    const int k = digits - 1 - X;
-    if (!(k > -kMaxPow10 && k <= kMaxPow10)) return r;
-    // Both scalings, then a choice without a branch (X0 or X0 + 1 is a coin toss for values
-    // of every size: a branch on it would often be mispredicted).
-    const double s0 = scaled(a, k), s1 = scaled(a, k - 1);
-    const bool up = s0 >= kPow10[digits];
-    X += up ? 1 : 0;
-    const double s = up ? s1 : s0;
-    // s is positive and below 2^53: truncation is floor, and s - whole is exact.
-    const double whole = static_cast<double>(static_cast<std::uint64_t>(s));
-    const double frac = s - whole;
-    if (!(whole >= kPow10[digits - 1] && whole < kPow10[digits] &&
-          std::abs(frac - 0.5) > kHalfwayMargin))
-        return r;
-    auto m = static_cast<std::uint64_t>(whole) + (frac > 0.5 ? 1 : 0);
-    if (m == kPow10Int[digits]) {  // 9.99...95 rounded up to 10.0...0
-        m = kPow10Int[digits - 1];
-        ++X;
-    }
-    const std::uint64_t m16 = m * kPow10Int[16 - digits];
-    r.high = eightDigits(static_cast<std::uint32_t>(m16 / 100000000));
-    r.low = eightDigits(static_cast<std::uint32_t>(m16 % 100000000));
-    // %g drops trailing zeros: the last digit is the top byte of `low`.
-    const int zeros = r.low != kZeroDigits ? std::countl_zero(r.low ^ kZeroDigits) / 8
-                                           : 8 + std::countl_zero(r.high ^ kZeroDigits) / 8;
-    r.n = 16 - zeros;
-    r.X = X;
-    r.negative = std::signbit(value);
-    r.fast = true;
-    return r;
-}
-
-// Writes `value` as roundSignificant prepared it (fixed for -4 <= X < digits, else
-// scientific), or through the standard library.
-char *writeRounded(char *out, const Rounded &r, double value, int digits) {
-    if (!r.fast)
-        return std::to_chars(out, out + kShortestMaxBytes, value, std::chars_format::general,
-                             digits)
-            .ptr;
-    *out = '-';
-    out += r.negative ? 1 : 0;
-    if (r.X >= -4 && r.X < digits) return fixedFromWords(out, r.high, r.low, r.n, r.X + 1);
-    fixedFromWords(out, r.high, r.low, r.n, 1);  // d.ddd
-    return exponentPart(out + (r.n > 1 ? r.n + 1 : 1), r.X);
-}
-
 }  // namespace
 
 char *writeShortest(char *out, double value) {
@@ -295,19 +240,43 @@ char *writeShortest(char *out, double value) {
 }
 
 char *writeSignificant(char *out, double value, int digits) {
+    digits = std::clamp(digits, 1, kMaxSignificant);
+    const double a = std::abs(value);
+    if (std::endian::native == std::endian::little && digits <= kFastSignificant &&
+        a >= kSmallestNormal && a <= kLargestFast) {
+        // X, the exponent of the leading digit, from the binary exponent (it is X0 or X0 + 1),
+        // then s = a 10^(digits - 1 - X) in one correctly rounded operation with an exact
+        // power of ten: its error, below 2^-53 s, is far less than kHalfwayMargin.
+        const int e2 = static_cast<int>((std::bit_cast<std::uint64_t>(a) >> 52) & 0x7ff) - 1023;
+        int X = (e2 * 1233) >> 12;  // floor(e2 log10 2), up to 1233/4096 ~ log10 2
+        int k = digits - 1 - X;
+        if (k > -kMaxPow10 && k <= kMaxPow10) {
+            // Both scalings, then a choice without a branch (X0 or X0 + 1 is a coin toss for
+            // values of every size: a branch on it would often be mispredicted).
+            const double s0 = scaled(a, k), s1 = scaled(a, k - 1);
+            const bool up = s0 >= kPow10[digits];
+            X += up ? 1 : 0;
+            const double s = up ? s1 : s0;
+            // s is positive and below 2^53: truncation is floor, and s - whole is exact.
+            const double whole = static_cast<double>(static_cast<std::uint64_t>(s));
+            const double frac = s - whole;
+            if (whole >= kPow10[digits - 1] && whole < kPow10[digits] &&
+                std::abs(frac - 0.5) > kHalfwayMargin) {
+                auto m = static_cast<std::uint64_t>(whole) + (frac > 0.5 ? 1 : 0);
+                if (m == kPow10Int[digits]) {  // 9.99...95 rounded up to 10.0...0
+                    m = kPow10Int[digits - 1];
+                    ++X;
+                }
+                *out = '-';
+                out += std::signbit(value) ? 1 : 0;
+                return significantText(out, m, digits, X);
+            }
+        }
+    }
     // Zero, subnormal, huge or too many digits for the fast path, or a value next to a
-    // rounding tie: the standard library decides (writeRounded).
-    digits = std::clamp(digits, 1, kMaxSignificant);
-    return writeRounded(out, roundSignificant(value, digits), value, digits);
-}
-
-char *writeSignificantPair(char *out, double a, double b, int digits, char separator) {
-    digits = std::clamp(digits, 1, kMaxSignificant);
-    const Rounded ra = roundSignificant(a, digits), rb = roundSignificant(b, digits);
-    if (!std::isnan(a)) out = writeRounded(out, ra, a, digits);
-    *out++ = separator;
-    if (!std::isnan(b)) out = writeRounded(out, rb, b, digits);
-    return out;
+    // rounding tie: the standard library decides.
+    return std::to_chars(out, out + kShortestMaxBytes, value, std::chars_format::general, digits)
+        .ptr;
 }
 
 namespace {

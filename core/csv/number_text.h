@@ -30,11 +30,6 @@ char *writeShortest(char *out, double value);
 // of ten and leaves values next to a rounding tie to the standard library.
 char *writeSignificant(char *out, double value, int digits);
 
-// writeSignificant(a), the separator, writeSignificant(b), with a NaN written as nothing: the
-// two roundings side by side, so that the processor works on both at once (two margins of a
-// row); `out` needs 2 kShortestMaxBytes + 1 of room.
-char *writeSignificantPair(char *out, double a, double b, int digits, char separator);
-
 // [first, last) as a decimal number (optional '-', digits with an optional '.', an optional
 // exponent), in full; false when the text has another form or needs the slow path.
 bool parseSimpleDecimal(const char *first, const char *last, double &out);

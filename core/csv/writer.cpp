@@ -64,20 +64,6 @@ void Writer::appendNumber(double value) {
     if (decimalComma_) std::replace(start, pos_, '.', ',');
 }
 
-void Writer::appendNumbers(double a, double b) {
-    if (digits_ == 0) {
-        appendNumber(a);
-        put(delimiter_);
-        appendNumber(b);
-        return;
-    }
-    rowStart_ = false;
-    if (room() < 2 * kShortestMaxBytes + 1) grow(2 * kShortestMaxBytes + 1);
-    char *start = pos_;
-    pos_ = writeSignificantPair(pos_, a, b, digits_, delimiter_);
-    if (decimalComma_) std::replace(start, pos_, '.', ',');  // the separator is not ','
-}
-
 void Writer::flush() {
     if (out_ == nullptr) return;
     if (size() > 0) out_->write(data_.get(), static_cast<std::streamsize>(size()));

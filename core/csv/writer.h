@@ -58,9 +58,6 @@ public:
     }
     // A number that continues the current row (no separator before it); NaN adds nothing.
     void appendNumber(double value);
-    // Two numbers with the separator between them, continuing the row: with a set number of
-    // significant digits both are rounded side by side (csv::writeSignificantPair).
-    void appendNumbers(double a, double b);
     // Whether field() would quote `text` with this writer's separator.
     bool needsQuotes(std::string_view text) const {
         // One pass over the (short) field: cheaper than a search per special character.

@@ -165,26 +165,6 @@ TEST(NumberText, SignificantMatchesGeneralFormatOnRandomValues) {
     }
 }
 
-TEST(NumberText, PairIsTheTwoNumbersWithTheSeparator) {
-    // A row's two margins written side by side: the same text as one writeSignificant after
-    // the other, a NaN written as nothing (the CSV writer's empty field).
-    std::mt19937_64 rng(9);
-    std::uniform_real_distribution<double> dT(-400.0, 400.0), lnP(std::log(1e-6), std::log(2e8));
-    const double nan = std::numeric_limits<double>::quiet_NaN();
-    for (int i = 0; i < 200'000; ++i) {
-        const double a = i % 97 == 0 ? nan : i % 89 == 0 ? 0.0 : dT(rng);
-        const double b = i % 61 == 0   ? nan
-                         : i % 53 == 0 ? std::bit_cast<double>(rng())
-                                       : (rng() & 1 ? 1.0 : -1.0) * std::exp(lnP(rng));
-        const int digits = 1 + static_cast<int>(rng() % 17);
-        char buf[2 * kShortestMaxBytes + 1];
-        const std::string pair(buf, writeSignificantPair(buf, a, b, digits, ';'));
-        const std::string expected = (std::isnan(a) ? "" : fastGeneral(a, digits)) + ";" +
-                                     (std::isnan(b) ? "" : fastGeneral(b, digits));
-        ASSERT_EQ(pair, expected) << a << " " << b << " " << digits;
-    }
-}
-
 double standardValue(const std::string &s) {
     double v = 0.0;
     std::from_chars(s.data(), s.data() + s.size(), v);
