@@ -9,6 +9,7 @@
 
 #include "widgets/boundary_sampling.h"
 #include "widgets/format.h"
+#include "widgets/label_layout.h"
 #include "widgets/region_raster.h"
 
 namespace pw::ui {
@@ -415,6 +416,7 @@ void renderScene(QCustomPlot &plot, const DiagramScene &scene, const SceneStyle 
     addPaths(c);
     addPoints(c);
     keepLabelsInView(c);
+    keepLabelsApart(plot);
     plot.legend->setVisible(scene.substances.size() > 1);
     plot.legend->setBrush(QBrush(style.background));
     plot.legend->setTextColor(style.text);
